@@ -1,0 +1,119 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.medium;
+
+import io.shieldmath.shield.quantity.Require;
+import java.util.Arrays;
+
+/**
+ * A table of measured complex permeability against frequency. Between points, µ' and µ''
+ * are interpolated linearly against log10(f); below the first point and at 0 Hz the
+ * first point's values hold, above the last point the last point's values hold (so
+ * give points up to the highest frequency you evaluate). Immutable and thread-safe;
+ * equality is by value.
+ */
+public final class TabulatedPermeability implements PermeabilityModel {
+
+    private final double[] hertz;
+    private final double[] logHertz;
+    private final double[] real;
+    private final double[] loss;
+
+    TabulatedPermeability(double[] hertz, double[] real, double[] loss) {
+        Require.nonNull("frequencies", hertz);
+        Require.nonNull("real parts", real);
+        Require.nonNull("loss parts", loss);
+        if (hertz.length == 0 || hertz.length != real.length || hertz.length != loss.length) {
+            throw new IllegalArgumentException("permeability table: frequencies, real parts and loss parts must "
+                    + "have the same length of at least 1; got " + hertz.length + ", " + real.length + ", "
+                    + loss.length);
+        }
+        this.hertz = hertz.clone();
+        this.real = real.clone();
+        this.loss = loss.clone();
+        this.logHertz = new double[hertz.length];
+        for (int i = 0; i < hertz.length; i++) {
+            Require.positive("permeability table frequency [" + i + "]", this.hertz[i], "Hz");
+            Require.positive("permeability table real part [" + i + "]", this.real[i], "(relative)");
+            Require.nonNegative("permeability table loss part [" + i + "]", this.loss[i], "(relative)");
+            if (i > 0 && !(this.hertz[i] > this.hertz[i - 1])) {
+                throw new io.shieldmath.shield.quantity.InvalidQuantityException(
+                        "permeability table frequency [" + i + "]", this.hertz[i] + " Hz",
+                        "greater than the previous point, " + this.hertz[i - 1] + " Hz");
+            }
+            logHertz[i] = Math.log10(this.hertz[i]);
+        }
+    }
+
+    /**
+     * The table's frequencies in Hz.
+     *
+     * @return a copy of the frequencies
+     */
+    public double[] frequencies() {
+        return hertz.clone();
+    }
+
+    /**
+     * The table's real parts µ'.
+     *
+     * @return a copy
+     */
+    public double[] realParts() {
+        return real.clone();
+    }
+
+    /**
+     * The table's loss parts µ''.
+     *
+     * @return a copy
+     */
+    public double[] lossParts() {
+        return loss.clone();
+    }
+
+    @Override
+    public double real(double f) {
+        return interpolate(real, f);
+    }
+
+    @Override
+    public double loss(double f) {
+        return interpolate(loss, f);
+    }
+
+    private double interpolate(double[] values, double f) {
+        int n = hertz.length;
+        if (!(f > hertz[0])) {
+            return values[0];
+        }
+        if (f >= hertz[n - 1]) {
+            return values[n - 1];
+        }
+        int i = Arrays.binarySearch(hertz, f);
+        if (i >= 0) {
+            return values[i];
+        }
+        int hi = -i - 1;
+        int lo = hi - 1;
+        double w = (Math.log10(f) - logHertz[lo]) / (logHertz[hi] - logHertz[lo]);
+        return values[lo] + w * (values[hi] - values[lo]);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof TabulatedPermeability t && Arrays.equals(t.hertz, hertz)
+                && Arrays.equals(t.real, real) && Arrays.equals(t.loss, loss);
+    }
+
+    @Override
+    public int hashCode() {
+        return (Arrays.hashCode(hertz) * 31 + Arrays.hashCode(real)) * 31 + Arrays.hashCode(loss);
+    }
+
+    @Override
+    public String toString() {
+        return "µr table of " + hertz.length + " points, " + hertz[0] + " Hz to " + hertz[hertz.length - 1] + " Hz";
+    }
+}

@@ -1,0 +1,231 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.planar;
+
+import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.medium.Medium;
+import io.shieldmath.shield.medium.MediumSource;
+import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.quantity.Length;
+import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.quantity.SheetResistance;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+
+/**
+ * An infinite planar barrier: an ordered stack of layers, the first facing the source.
+ * Built fluently:
+ *
+ * <pre>{@code
+ * Barrier b = Barrier.of(copper, mil(21)).thenGap(mm(2)).then(nickelIron, mm(0.5));
+ * PlanarResult r = b.facing(IncidentField.planeWave()).at(kHz(10));
+ * }</pre>
+ *
+ * <p>At most {@value #MAX_LAYERS} layers; each layer's conductivity at most 1e10 S/m.
+ * Immutable and thread-safe: one barrier may be evaluated from many threads at once.
+ * Every {@code then…} method returns a new barrier and leaves this one untouched.
+ */
+public final class Barrier {
+
+    /** The largest number of layers in one barrier. */
+    public static final int MAX_LAYERS = 256;
+
+    private final List<Layer> layers;
+    // Primitive copies for the hot path, indexed like the layers.
+    final double[] thickness;
+    final double[] sigma;
+    final double[] epsilon;
+    final PermeabilityModel[] mu;
+    /** The total thickness in a one-element array, for the free-space reference. */
+    final double[] total;
+
+    private Barrier(List<Layer> layers) {
+        if (layers.isEmpty()) {
+            throw new IllegalArgumentException("a barrier needs at least one layer");
+        }
+        if (layers.size() > MAX_LAYERS) {
+            throw new IllegalArgumentException("a barrier has at most " + MAX_LAYERS + " layers; got "
+                    + layers.size());
+        }
+        this.layers = Collections.unmodifiableList(new ArrayList<>(layers));
+        int n = layers.size();
+        thickness = new double[n];
+        sigma = new double[n];
+        epsilon = new double[n];
+        mu = new PermeabilityModel[n];
+        double sum = 0;
+        for (int i = 0; i < n; i++) {
+            Layer l = Require.nonNull("layer " + (i + 1), layers.get(i));
+            Medium m = l.medium();
+            thickness[i] = l.thickness().toMetres();
+            sigma[i] = Require.inRange("layer " + (i + 1) + " conductivity", m.conductivity().toSiemensPerMetre(),
+                    0, 1e10, "S/m");
+            epsilon[i] = m.permittivity().value();
+            mu[i] = m.permeability();
+            sum += thickness[i];
+        }
+        total = new double[] {sum};
+    }
+
+    /**
+     * A barrier of one layer.
+     *
+     * @param medium    the medium or catalogue material, not null
+     * @param thickness its thickness, from 1 pm to 100 m
+     * @return the barrier
+     */
+    public static Barrier of(MediumSource medium, Length thickness) {
+        return of(Layer.of(medium, thickness));
+    }
+
+    /**
+     * A barrier of the given layers, the first facing the source.
+     *
+     * @param layers one or more layers, none null
+     * @return the barrier
+     * @throws IllegalArgumentException if there are no layers or more than {@value #MAX_LAYERS}
+     */
+    public static Barrier of(Layer... layers) {
+        return new Barrier(List.of(Require.nonNull("layers", layers)));
+    }
+
+    /**
+     * A barrier of the given layers, the first facing the source.
+     *
+     * @param layers one or more layers, none null
+     * @return the barrier
+     */
+    public static Barrier of(List<Layer> layers) {
+        return new Barrier(List.copyOf(Require.nonNull("layers", layers)));
+    }
+
+    /**
+     * This barrier with one more layer on the side away from the source.
+     *
+     * @param medium    the medium or catalogue material, not null
+     * @param thickness its thickness
+     * @return the new barrier
+     */
+    public Barrier then(MediumSource medium, Length thickness) {
+        return then(Layer.of(medium, thickness));
+    }
+
+    /**
+     * This barrier with one more layer on the side away from the source.
+     *
+     * @param layer the layer, not null
+     * @return the new barrier
+     */
+    public Barrier then(Layer layer) {
+        List<Layer> l = new ArrayList<>(layers);
+        l.add(Require.nonNull("layer", layer));
+        return new Barrier(l);
+    }
+
+    /**
+     * This barrier followed by an air gap.
+     *
+     * @param thickness the gap
+     * @return the new barrier
+     */
+    public Barrier thenGap(Length thickness) {
+        return then(Layer.gap(thickness));
+    }
+
+    /**
+     * This barrier followed by a thin film known by its sheet resistance.
+     *
+     * @param rs the sheet resistance
+     * @return the new barrier
+     * @see Layer#film(SheetResistance)
+     */
+    public Barrier thenFilm(SheetResistance rs) {
+        return then(Layer.film(rs));
+    }
+
+    /**
+     * This barrier with layer {@code index} replaced.
+     *
+     * @param index the layer's index, 0 for the source-facing layer
+     * @param layer the new layer, not null
+     * @return the new barrier
+     * @throws IndexOutOfBoundsException if there is no such layer
+     */
+    public Barrier withLayer(int index, Layer layer) {
+        List<Layer> l = new ArrayList<>(layers);
+        l.set(index, Require.nonNull("layer", layer));
+        return new Barrier(l);
+    }
+
+    /**
+     * The same layers in the opposite order (the source now faces the last layer).
+     *
+     * @return the reversed barrier
+     */
+    public Barrier reversed() {
+        List<Layer> l = new ArrayList<>(layers);
+        Collections.reverse(l);
+        return new Barrier(l);
+    }
+
+    /**
+     * The layers, the source-facing one first.
+     *
+     * @return an unmodifiable list
+     */
+    public List<Layer> layers() {
+        return layers;
+    }
+
+    /**
+     * The number of layers.
+     *
+     * @return 1 or more
+     */
+    public int layerCount() {
+        return layers.size();
+    }
+
+    /**
+     * The total thickness, gaps included.
+     *
+     * @return the sum of the layer thicknesses
+     */
+    public Length totalThickness() {
+        return Length.ofMetres(total[0]);
+    }
+
+    /**
+     * This barrier in a field, ready to evaluate at frequencies.
+     *
+     * @param field the incident field, not null
+     * @return the evaluation
+     */
+    public PlanarEvaluation facing(IncidentField field) {
+        return new PlanarEvaluation(this, Require.nonNull("field", field));
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Barrier b && b.layers.equals(layers);
+    }
+
+    @Override
+    public int hashCode() {
+        return layers.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        StringBuilder s = new StringBuilder();
+        for (Layer l : layers) {
+            if (s.length() > 0) {
+                s.append(" | ");
+            }
+            s.append(l);
+        }
+        return s.toString();
+    }
+}

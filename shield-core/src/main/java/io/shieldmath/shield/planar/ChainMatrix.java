@@ -1,0 +1,176 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.planar;
+
+import io.shieldmath.shield.medium.ConstantPermeability;
+import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.quantity.PhysicalConstants;
+
+/**
+ * The transmission-line (Schelkunoff) chain-matrix product for a planar stack, on
+ * primitives: no objects are created per call, so it is the hot path of every planar
+ * evaluation and of the spectral coil-coupling integral.
+ *
+ * <p>Layer i has propagation constant γ = sqrt(jωµ(σ + jωε)) and intrinsic impedance
+ * η = jωµ/γ; its chain matrix is [[cosh γt, η sinh γt], [sinh γt / η, cosh γt]]. Between
+ * equal terminating impedances Z on both sides, T = 2 / (A + B/Z + C·Z + D).
+ *
+ * <p>Numerics (the departure from the textbook product): cosh and sinh overflow long
+ * before the shielding effectiveness stops being meaningful, so each layer's matrix is
+ * divided by e^{γt}/2 and the factor is carried as a logarithm. The scaled matrix is
+ * [[1+E, η(1−E)], [(1−E)/η, 1+E]] with E = e^{−2γt}, |E| ≤ 1; 1 − E is computed as
+ * −expm1(−2γt) so that electrically thin layers lose no digits.
+ */
+final class ChainMatrix {
+
+    static final double LN2 = Math.log(2);
+    /** Decibels per neper of field amplitude, 20/ln 10 = 8.686. */
+    static final double DB_PER_NEPER = 20 / Math.log(10);
+
+    private static final PermeabilityModel[] VACUUM_MU = {ConstantPermeability.ONE};
+    private static final double[] ZERO = {0};
+    private static final double[] ONE = {1};
+
+    private ChainMatrix() {
+    }
+
+    /**
+     * The natural log of |T| of a stack between equal impedances.
+     *
+     * @param t     thicknesses in m
+     * @param sigma conductivities in S/m
+     * @param eps   relative permittivities
+     * @param mu    permeability models
+     * @param hz    frequency in Hz
+     * @param zr    Re of the terminating impedance, Ω
+     * @param zi    Im of the terminating impedance, Ω
+     * @param parts null, or an array of at least n + 2 slots that receives: [0] arg T in
+     *              radians, [1] the interface (reflection) loss in dB, [2 + i] the
+     *              absorption of layer i in dB
+     * @return ln |T|
+     */
+    static double logTransmission(double[] t, double[] sigma, double[] eps, PermeabilityModel[] mu,
+                                  double hz, double zr, double zi, double[] parts) {
+        final double w = 2 * Math.PI * hz;
+        final double wMu0 = w * PhysicalConstants.MU_0;
+        final double wEps0 = w * PhysicalConstants.EPSILON_0;
+        // Running product M = [[a, b], [c, d]], complex entries as (re, im).
+        double ar = 1, ai = 0, br = 0, bi = 0, cr = 0, ci = 0, dr = 1, di = 0;
+        double logScale = 0;
+        double phase = 0;
+        double reflection = 0;
+        double prevR = zr, prevI = zi;
+        final int n = t.length;
+        for (int i = 0; i < n; i++) {
+            // jωµ = ωµ0µ'' + j ωµ0µ'   (µr = µ' − jµ'')
+            final double p = wMu0 * mu[i].loss(hz);
+            final double q = wMu0 * mu[i].real(hz);
+            final double s = sigma[i];
+            final double we = wEps0 * eps[i];
+            // γ² = jωµ·(σ + jωε); its imaginary part is ≥ 0 for a passive medium.
+            final double g2r = p * s - q * we;
+            final double g2i = p * we + q * s + 0.0;
+            // Principal square root, written to avoid cancellation on either sign of Re.
+            final double mod = Math.sqrt(g2r * g2r + g2i * g2i);
+            double gr, gi;
+            if (g2r >= 0) {
+                gr = Math.sqrt(0.5 * (mod + g2r));
+                gi = gr > 0 ? g2i / (2 * gr) : 0;
+            } else {
+                gi = Math.sqrt(0.5 * (mod - g2r));
+                gr = g2i / (2 * gi);
+            }
+            // η = jωµ/γ and 1/η = γ/(jωµ).
+            final double gg = gr * gr + gi * gi;
+            final double etaR = (p * gr + q * gi) / gg;
+            final double etaI = (q * gr - p * gi) / gg;
+            final double pq = p * p + q * q;
+            final double invR = (gr * p + gi * q) / pq;
+            final double invI = (gi * p - gr * q) / pq;
+            final double ta = gr * t[i];
+            final double tb = gi * t[i];
+            // 1 − E = −expm1(−2a − 2jb); expm1(x + jy) = expm1(x)cos y − 2sin²(y/2) + j e^x sin y.
+            final double half = Math.sin(tb);     // sin(y/2) with y = −2b, up to sign
+            final double cosHalf = Math.cos(tb);
+            final double sinY = -2 * half * cosHalf;
+            final double cosY = 1 - 2 * half * half;
+            final double em1 = Math.expm1(-2 * ta);
+            final double omr = -(em1 * cosY - 2 * half * half);
+            final double omi = -((em1 + 1) * sinY);
+            final double opr = 2 - omr;
+            final double opi = -omi;
+            // Scaled layer matrix L = [[op, η·om], [om/η, op]].
+            final double lbr = etaR * omr - etaI * omi;
+            final double lbi = etaR * omi + etaI * omr;
+            final double lcr = invR * omr - invI * omi;
+            final double lci = invR * omi + invI * omr;
+            // M ← M·L
+            final double nar = ar * opr - ai * opi + br * lcr - bi * lci;
+            final double nai = ar * opi + ai * opr + br * lci + bi * lcr;
+            final double nbr = ar * lbr - ai * lbi + br * opr - bi * opi;
+            final double nbi = ar * lbi + ai * lbr + br * opi + bi * opr;
+            final double ncr = cr * opr - ci * opi + dr * lcr - di * lci;
+            final double nci = cr * opi + ci * opr + dr * lci + di * lcr;
+            final double ndr = cr * lbr - ci * lbi + dr * opr - di * opi;
+            final double ndi = cr * lbi + ci * lbr + dr * opi + di * opr;
+            ar = nar;
+            ai = nai;
+            br = nbr;
+            bi = nbi;
+            cr = ncr;
+            ci = nci;
+            dr = ndr;
+            di = ndi;
+            logScale += LN2 - ta;
+            phase -= tb;
+            if (parts != null) {
+                parts[2 + i] = DB_PER_NEPER * ta;
+                reflection += interfaceLossDb(prevR, prevI, etaR, etaI);
+                prevR = etaR;
+                prevI = etaI;
+            }
+        }
+        // S = A + B/Z + C·Z + D
+        final double zz = zr * zr + zi * zi;
+        final double sr = ar + dr + (br * zr + bi * zi) / zz + (cr * zr - ci * zi);
+        final double si = ai + di + (bi * zr - br * zi) / zz + (cr * zi + ci * zr);
+        final double logS = logAbs(sr, si);
+        if (parts != null) {
+            parts[0] = phase - Math.atan2(si, sr);
+            parts[1] = reflection + interfaceLossDb(prevR, prevI, zr, zi);
+        }
+        return LN2 - logS + logScale;
+    }
+
+    /**
+     * ln |T| of free space of thickness {@code total[0]} between the same impedances: the
+     * reference for insertion loss. Computed by the same code as any stack, so a
+     * barrier of one free-space layer gives exactly 0 dB.
+     */
+    static double logFreeSpaceTransmission(double[] total, double hz, double zr, double zi) {
+        return logTransmission(total, ZERO, ONE, VACUUM_MU, hz, zr, zi, null);
+    }
+
+    /** 10·log10 |(Za + Zb)² / (4·Za·Zb)|: the loss of one interface, symmetric in Za and Zb. */
+    static double interfaceLossDb(double ar, double ai, double br, double bi) {
+        double sumLog = logAbs(ar + br, ai + bi);
+        double prodLog = 0.5 * (logAbs(ar, ai) + logAbs(br, bi));
+        return DB_PER_NEPER * (sumLog - LN2 - prodLog);
+    }
+
+    /** ln |x + jy| without overflow or underflow of the squares. */
+    static double logAbs(double x, double y) {
+        double s = x * x + y * y;
+        if (s > Double.MIN_NORMAL && s < Double.POSITIVE_INFINITY) {
+            return 0.5 * Math.log(s);
+        }
+        double m = Math.max(Math.abs(x), Math.abs(y));
+        if (m == 0) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        double u = x / m;
+        double v = y / m;
+        return Math.log(m) + 0.5 * Math.log(u * u + v * v);
+    }
+}

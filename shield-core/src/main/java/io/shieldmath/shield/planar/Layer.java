@@ -1,0 +1,127 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.planar;
+
+import io.shieldmath.shield.medium.Medium;
+import io.shieldmath.shield.medium.MediumSource;
+import io.shieldmath.shield.quantity.Conductivity;
+import io.shieldmath.shield.quantity.Length;
+import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.quantity.SheetResistance;
+
+/**
+ * One layer of a planar barrier: a medium and a thickness.
+ *
+ * <p>Thickness range: 1 pm to 100 m. Immutable and thread-safe; equality is by value.
+ */
+public final class Layer {
+
+    /** The thickness given to a film known only by its sheet resistance: 1 µm. */
+    public static final Length NOMINAL_FILM_THICKNESS = Length.ofMicrometres(1);
+
+    private final Medium medium;
+    private final Length thickness;
+
+    private Layer(Medium medium, Length thickness) {
+        this.medium = medium;
+        this.thickness = thickness;
+    }
+
+    /**
+     * A layer of a medium.
+     *
+     * @param medium    the medium or a catalogue material, not null
+     * @param thickness the thickness, from 1 pm to 100 m
+     * @return the layer
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is out of range
+     */
+    public static Layer of(MediumSource medium, Length thickness) {
+        Medium m = Require.nonNull("medium", Require.nonNull("medium", medium).medium());
+        Require.nonNull("thickness", thickness);
+        Require.inRange("layer thickness", thickness.toMetres(), 1e-12, 100, "m");
+        return new Layer(m, thickness);
+    }
+
+    /**
+     * An air gap (treated as free space).
+     *
+     * @param thickness the gap, from 1 pm to 100 m
+     * @return the layer
+     */
+    public static Layer gap(Length thickness) {
+        return of(Medium.AIR, thickness);
+    }
+
+    /**
+     * A thin conductive film, plating or coating known by its sheet resistance Rs, given the
+     * nominal thickness {@link #NOMINAL_FILM_THICKNESS} and the conductivity σ = 1/(Rs·t).
+     * For films much thinner than a skin depth only σ·t matters, so the nominal thickness
+     * does not change the result; for a plane wave the shielding effectiveness then tends
+     * to 20·log10(1 + η0/(2Rs)).
+     *
+     * @param rs the sheet resistance, not null
+     * @return the layer
+     */
+    public static Layer film(SheetResistance rs) {
+        return film(rs, NOMINAL_FILM_THICKNESS);
+    }
+
+    /**
+     * A thin film of known thickness and sheet resistance (σ = 1/(Rs·t)).
+     *
+     * @param rs        the sheet resistance, not null
+     * @param thickness the film thickness, from 1 pm to 100 m
+     * @return the layer
+     */
+    public static Layer film(SheetResistance rs, Length thickness) {
+        Require.nonNull("sheet resistance", rs);
+        Require.nonNull("thickness", thickness);
+        double sigma = 1 / (rs.toOhmsPerSquare() * thickness.toMetres());
+        Medium m = Medium.conductor("film of " + rs, Conductivity.ofSiemensPerMetre(sigma), 1);
+        return of(m, thickness);
+    }
+
+    /**
+     * The medium.
+     *
+     * @return the medium
+     */
+    public Medium medium() {
+        return medium;
+    }
+
+    /**
+     * The thickness.
+     *
+     * @return t
+     */
+    public Length thickness() {
+        return thickness;
+    }
+
+    /**
+     * A copy with another thickness.
+     *
+     * @param newThickness the thickness, from 1 pm to 100 m
+     * @return the new layer; this one is unchanged
+     */
+    public Layer withThickness(Length newThickness) {
+        return of(medium, newThickness);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Layer l && l.medium.equals(medium) && l.thickness.equals(thickness);
+    }
+
+    @Override
+    public int hashCode() {
+        return medium.hashCode() * 31 + thickness.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return thickness + " " + medium.name();
+    }
+}

@@ -1,0 +1,183 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.planar;
+
+import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.FrequencyBand;
+import io.shieldmath.shield.quantity.InvalidQuantityException;
+import io.shieldmath.shield.quantity.Require;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A barrier facing an incident field: evaluate it at one frequency, over a sweep, or in
+ * bulk on primitive arrays.
+ *
+ * <p>The shielding effectiveness is the insertion loss against the same thickness of
+ * free space: SE = 20·log10 |T_free / T|, with T from the chain-matrix product of the
+ * layers between the field's wave impedance on both sides (DOMAIN §3; S. A.
+ * Schelkunoff's transmission-line view of shielding, as in Ott 2009 ch. 6). A barrier
+ * of free space gives 0 dB exactly.
+ *
+ * <p>Valid frequencies: {@value #MIN_HERTZ} Hz to {@value #MAX_HERTZ} Hz. The
+ * result is finite for every layer thickness, conductivity and permeability the layer
+ * types accept (thick layers are handled in log form, see the class notes of the engine).
+ *
+ * <p>Immutable and thread-safe; the batch methods allocate nothing per point and may be
+ * called from many threads on the same object.
+ */
+public final class PlanarEvaluation {
+
+    /** The lowest frequency evaluated, in Hz. */
+    public static final double MIN_HERTZ = 1e-6;
+    /** The highest frequency evaluated, in Hz. */
+    public static final double MAX_HERTZ = 1e13;
+
+    private final Barrier barrier;
+    private final IncidentField field;
+
+    PlanarEvaluation(Barrier barrier, IncidentField field) {
+        this.barrier = barrier;
+        this.field = field;
+    }
+
+    /**
+     * The barrier.
+     *
+     * @return the barrier
+     */
+    public Barrier barrier() {
+        return barrier;
+    }
+
+    /**
+     * The incident field.
+     *
+     * @return the field
+     */
+    public IncidentField field() {
+        return field;
+    }
+
+    /**
+     * The full result at one frequency: total SE, transmission coefficient and parts.
+     *
+     * @param frequency the frequency, from 1 µHz to 10 THz
+     * @return the result
+     * @throws InvalidQuantityException if the frequency is out of range
+     */
+    public PlanarResult at(Frequency frequency) {
+        double hz = checkHertz("frequency", Require.nonNull("frequency", frequency).toHertz());
+        return evaluate(frequency, hz);
+    }
+
+    private PlanarResult evaluate(Frequency frequency, double hz) {
+        int n = barrier.layerCount();
+        double[] parts = new double[n + 2];
+        double zr = field.impedanceReal(hz);
+        double zi = field.impedanceImaginary(hz);
+        double logT = ChainMatrix.logTransmission(barrier.thickness, barrier.sigma, barrier.epsilon, barrier.mu,
+                hz, zr, zi, parts);
+        double logFree = ChainMatrix.logFreeSpaceTransmission(barrier.total, hz, zr, zi);
+        double se = ChainMatrix.DB_PER_NEPER * (logFree - logT);
+        double[] absorption = new double[n];
+        System.arraycopy(parts, 2, absorption, 0, n);
+        requireFinite(se, hz);
+        return new PlanarResult(frequency, field, se, absorption, parts[1], logT, parts[0]);
+    }
+
+    /**
+     * The results at log-spaced frequencies across a band, both ends included.
+     *
+     * @param band   the band, not null, within 1 µHz to 10 THz
+     * @param points the number of points, 1 or more
+     * @return the sweep
+     */
+    public PlanarSweep sweep(FrequencyBand band, int points) {
+        Require.nonNull("band", band);
+        checkHertz("band lower frequency", band.low().toHertz());
+        checkHertz("band upper frequency", band.high().toHertz());
+        double[] hz = band.logSpacedHertz(points);
+        List<PlanarResult> results = new ArrayList<>(points);
+        for (double f : hz) {
+            results.add(evaluate(Frequency.ofHertz(f), f));
+        }
+        return new PlanarSweep(results);
+    }
+
+    /**
+     * The total shielding effectiveness at one frequency, in dB, without creating objects.
+     *
+     * @param hertz the frequency in Hz, from 1 µHz to 10 THz
+     * @return SE in dB
+     * @throws InvalidQuantityException if the frequency is out of range
+     */
+    public double shieldingEffectivenessDb(double hertz) {
+        return seDb(checkHertz("frequency", hertz));
+    }
+
+    /**
+     * The total shielding effectiveness at many frequencies, for instrument software: no
+     * allocation per point, safe to call from many threads.
+     *
+     * @param hertz frequencies in Hz, each from 1 µHz to 10 THz, not null
+     * @param outDb the array that receives SE in dB, at least as long as {@code hertz}, not null
+     * @return {@code outDb}
+     * @throws InvalidQuantityException if a frequency is out of range (named by its index); nothing
+     *                                  is written from that index on
+     * @throws IllegalArgumentException if {@code outDb} is too short
+     */
+    public double[] shieldingEffectivenessDb(double[] hertz, double[] outDb) {
+        Require.nonNull("frequencies", hertz);
+        Require.nonNull("output array", outDb);
+        if (outDb.length < hertz.length) {
+            throw new IllegalArgumentException("output array holds " + outDb.length + " values but "
+                    + hertz.length + " frequencies were given");
+        }
+        for (int i = 0; i < hertz.length; i++) {
+            outDb[i] = seDb(checkHertz("frequency [" + i + "]", hertz[i]));
+        }
+        return outDb;
+    }
+
+    /**
+     * The total shielding effectiveness at many frequencies, into a new array.
+     *
+     * @param hertz frequencies in Hz, each from 1 µHz to 10 THz, not null
+     * @return SE in dB at each frequency
+     */
+    public double[] shieldingEffectivenessDb(double[] hertz) {
+        return shieldingEffectivenessDb(hertz, new double[Require.nonNull("frequencies", hertz).length]);
+    }
+
+    private double seDb(double hz) {
+        double zr = field.impedanceReal(hz);
+        double zi = field.impedanceImaginary(hz);
+        double logT = ChainMatrix.logTransmission(barrier.thickness, barrier.sigma, barrier.epsilon, barrier.mu,
+                hz, zr, zi, null);
+        double logFree = ChainMatrix.logFreeSpaceTransmission(barrier.total, hz, zr, zi);
+        double se = ChainMatrix.DB_PER_NEPER * (logFree - logT);
+        requireFinite(se, hz);
+        return se;
+    }
+
+    private void requireFinite(double se, double hz) {
+        if (!Double.isFinite(se)) {
+            // Only a permeability model that breaks its contract (NaN, µ' ≤ 0) can get here.
+            throw new ArithmeticException("shielding effectiveness of " + barrier + " at " + hz
+                    + " Hz is not finite; check the layers' permeability models, which must return finite "
+                    + "µ' > 0 and µ'' >= 0");
+        }
+    }
+
+    private static double checkHertz(String what, double hz) {
+        return Require.inRange(what, hz, MIN_HERTZ, MAX_HERTZ, "Hz");
+    }
+
+    @Override
+    public String toString() {
+        return barrier + " facing " + field;
+    }
+}

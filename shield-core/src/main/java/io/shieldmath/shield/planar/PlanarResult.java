@@ -1,0 +1,188 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.planar;
+
+import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.ShieldingFactor;
+import java.util.Locale;
+import org.apache.commons.math3.complex.Complex;
+
+/**
+ * The shielding effectiveness of a planar barrier at one frequency, with its parts.
+ *
+ * <p>The parts and how they add up, SE = A + R + B:
+ * <ul>
+ *   <li>A, absorption: Σ 20·log10|e^{γ_i t_i}| over the layers (8.686·t/δ for a good
+ *       conductor); also given per layer.</li>
+ *   <li>R, reflection: the single-pass loss of every interface, Σ 10·log10|(Z_a + Z_b)²/(4·Z_a·Z_b)|
+ *       from the wave impedance through each layer's η and back to the wave impedance.
+ *       For one layer this is exactly 20·log10|(1 + K)²/(4K)|, K = Zw/η (DOMAIN §3).</li>
+ *   <li>B, multiple reflections: the rest, SE − A − R. For one layer in a plane wave it
+ *       equals 20·log10|1 − ((K−1)/(K+1))²·e^{−2γt}|; in a near field it also holds the
+ *       free-space reference term, which is negligible while k0·t ≪ 1. It is negative
+ *       when re-reflections leak field through a thin shield.</li>
+ * </ul>
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class PlanarResult {
+
+    private final Frequency frequency;
+    private final IncidentField field;
+    private final double totalDb;
+    private final double[] absorptionDb;
+    private final double absorptionTotal;
+    private final double reflectionDb;
+    private final double logT;
+    private final double phase;
+
+    PlanarResult(Frequency frequency, IncidentField field, double totalDb, double[] absorptionDb,
+                 double reflectionDb, double logT, double phase) {
+        this.frequency = frequency;
+        this.field = field;
+        this.totalDb = totalDb;
+        this.absorptionDb = absorptionDb;
+        double a = 0;
+        for (double x : absorptionDb) {
+            a += x;
+        }
+        this.absorptionTotal = a;
+        this.reflectionDb = reflectionDb;
+        this.logT = logT;
+        this.phase = phase;
+    }
+
+    /**
+     * The frequency of this result.
+     *
+     * @return f
+     */
+    public Frequency frequency() {
+        return frequency;
+    }
+
+    /**
+     * The incident field of this result.
+     *
+     * @return the field
+     */
+    public IncidentField field() {
+        return field;
+    }
+
+    /**
+     * The total shielding effectiveness in dB.
+     *
+     * @return SE, finite
+     */
+    public double totalDb() {
+        return totalDb;
+    }
+
+    /**
+     * The total shielding effectiveness.
+     *
+     * @return SE
+     */
+    public Decibels shieldingEffectiveness() {
+        return Decibels.of(totalDb);
+    }
+
+    /**
+     * The shielding factor 10^(SE/20).
+     *
+     * @return S
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if SE is above about 6160 dB,
+     *                                  where S does not fit a double (use {@link #totalDb()})
+     */
+    public ShieldingFactor shieldingFactor() {
+        return ShieldingFactor.from(shieldingEffectiveness());
+    }
+
+    /**
+     * The total absorption A in dB.
+     *
+     * @return A, 0 or more
+     */
+    public double absorptionDb() {
+        return absorptionTotal;
+    }
+
+    /**
+     * The absorption of one layer in dB.
+     *
+     * @param layer the layer's index, 0 for the source-facing layer
+     * @return A of that layer
+     * @throws IndexOutOfBoundsException if there is no such layer
+     */
+    public double absorptionDb(int layer) {
+        return absorptionDb[layer];
+    }
+
+    /**
+     * The number of layers.
+     *
+     * @return the layer count
+     */
+    public int layerCount() {
+        return absorptionDb.length;
+    }
+
+    /**
+     * The reflection loss R in dB (see the class description).
+     *
+     * @return R
+     */
+    public double reflectionDb() {
+        return reflectionDb;
+    }
+
+    /**
+     * The multiple-reflection correction B = SE − A − R in dB (see the class description).
+     *
+     * @return B, often negative for thin shields
+     */
+    public double multipleReflectionDb() {
+        return totalDb - absorptionTotal - reflectionDb;
+    }
+
+    /**
+     * 20·log10|T| of the barrier's transmission coefficient, finite even where T itself
+     * underflows.
+     *
+     * @return |T| in dB, usually negative
+     */
+    public double transmissionDb() {
+        return ChainMatrix.DB_PER_NEPER * logT;
+    }
+
+    /**
+     * The phase of the transmission coefficient T, in radians (not reduced to (−π, π]).
+     *
+     * @return arg T
+     */
+    public double transmissionPhase() {
+        return phase;
+    }
+
+    /**
+     * The complex transmission coefficient T (field behind over field incident, between
+     * the wave impedance on both sides). Below about 1e-308 its magnitude underflows to
+     * zero; use {@link #transmissionDb()} for thick barriers.
+     *
+     * @return T
+     */
+    public Complex transmission() {
+        double m = Math.exp(logT);
+        return new Complex(m * Math.cos(phase), m * Math.sin(phase));
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "SE %.2f dB at %s (A %.2f dB, R %.2f dB, B %.2f dB)", totalDb,
+                frequency, absorptionTotal, reflectionDb, multipleReflectionDb());
+    }
+}

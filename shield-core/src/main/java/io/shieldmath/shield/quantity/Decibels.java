@@ -1,0 +1,128 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.quantity;
+
+/**
+ * A level in decibels of a field-amplitude ratio: 20·log10 of the ratio, so 20 dB is a
+ * factor of 10 in field. Negative values are allowed (a multiple-reflection correction,
+ * a margin that is missed).
+ *
+ * <p>Immutable and thread-safe; equality is by value. The text form is {@code "42.5 dB"}.
+ */
+public final class Decibels implements Comparable<Decibels> {
+
+    /** Zero decibels: a ratio of one. */
+    public static final Decibels ZERO = new Decibels(0);
+
+    private final double db;
+
+    private Decibels(double db) {
+        this.db = db;
+    }
+
+    /**
+     * Obtains a level in decibels.
+     *
+     * @param db the level, finite
+     * @return the level
+     * @throws InvalidQuantityException if {@code db} is NaN or infinite
+     */
+    public static Decibels of(double db) {
+        return new Decibels(Require.finite("level", db, "dB") + 0.0);
+    }
+
+    /**
+     * The level of a field-amplitude ratio, 20·log10(ratio).
+     *
+     * @param ratio the ratio, finite and greater than 0
+     * @return the level
+     * @throws InvalidQuantityException if the ratio is not finite and positive
+     */
+    public static Decibels ofFieldRatio(double ratio) {
+        return of(20 * Math.log10(Require.positive("field ratio", ratio, "(plain number)")));
+    }
+
+    /**
+     * Reads {@code "42.5 dB"} (the unit is required).
+     *
+     * @param text the text, not null
+     * @return the level
+     * @throws InvalidQuantityException if the text does not read
+     */
+    public static Decibels parse(CharSequence text) {
+        String s = Require.nonNull("level text", text).toString().strip().replace('\u2212', '-');
+        if (!s.matches("[+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?\\s*dB")) {
+            throw InvalidQuantityException.unreadable("level", text.toString(), "not a number followed by dB",
+                    "a level such as \"42.5 dB\"");
+        }
+        return of(Double.parseDouble(s.substring(0, s.length() - 2).strip()));
+    }
+
+    /**
+     * The level in dB.
+     *
+     * @return the level
+     */
+    public double toDb() {
+        return db;
+    }
+
+    /**
+     * The field-amplitude ratio, 10^(dB/20); may overflow to infinity above about 6160 dB.
+     *
+     * @return the ratio
+     */
+    public double toFieldRatio() {
+        return Math.pow(10, db / 20);
+    }
+
+    /**
+     * The sum of two levels.
+     *
+     * @param other the level to add, not null
+     * @return the sum; this object is unchanged
+     */
+    public Decibels plus(Decibels other) {
+        return of(db + Require.nonNull("other", other).db);
+    }
+
+    /**
+     * The difference of two levels.
+     *
+     * @param other the level to subtract, not null
+     * @return the difference; this object is unchanged
+     */
+    public Decibels minus(Decibels other) {
+        return of(db - Require.nonNull("other", other).db);
+    }
+
+    /**
+     * Whether the level is below zero.
+     *
+     * @return true if negative
+     */
+    public boolean isNegative() {
+        return db < 0;
+    }
+
+    @Override
+    public int compareTo(Decibels o) {
+        return Double.compare(db, o.db);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Decibels d && Double.compare(d.db, db) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return Double.hashCode(db);
+    }
+
+    @Override
+    public String toString() {
+        return Text.number(db) + " dB";
+    }
+}

@@ -1,0 +1,244 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.quantity;
+
+/**
+ * Short factories for static import, so a stack reads like the engineer's sentence:
+ *
+ * <pre>{@code
+ * import static io.shieldmath.shield.quantity.Quantities.*;
+ *
+ * Length t = mil(21);          // 533.4 µm
+ * Frequency f = kHz(10);       // 10 kHz
+ * Conductivity s = iacs(61);   // 35.38 MS/m
+ * }</pre>
+ *
+ * <p>Each method is the same as the named factory of its type and throws the same
+ * {@link InvalidQuantityException}.
+ */
+public final class Quantities {
+
+    private Quantities() {
+    }
+
+    /**
+     * A frequency in hertz; same as {@link Frequency#ofHertz(double)}.
+     *
+     * @param value the value in hertz
+     * @return the quantity
+     */
+    public static Frequency Hz(double value) {
+        return Frequency.ofHertz(value);
+    }
+
+    /**
+     * A frequency in kilohertz; same as {@link Frequency#ofKilohertz(double)}.
+     *
+     * @param value the value in kilohertz
+     * @return the quantity
+     */
+    public static Frequency kHz(double value) {
+        return Frequency.ofKilohertz(value);
+    }
+
+    /**
+     * A frequency in megahertz; same as {@link Frequency#ofMegahertz(double)}.
+     *
+     * @param value the value in megahertz
+     * @return the quantity
+     */
+    public static Frequency MHz(double value) {
+        return Frequency.ofMegahertz(value);
+    }
+
+    /**
+     * A frequency in gigahertz; same as {@link Frequency#ofGigahertz(double)}.
+     *
+     * @param value the value in gigahertz
+     * @return the quantity
+     */
+    public static Frequency GHz(double value) {
+        return Frequency.ofGigahertz(value);
+    }
+
+    /**
+     * A length in metres; same as {@link Length#ofMetres(double)}.
+     *
+     * @param value the value in metres
+     * @return the quantity
+     */
+    public static Length m(double value) {
+        return Length.ofMetres(value);
+    }
+
+    /**
+     * A length in centimetres; same as {@link Length#ofCentimetres(double)}.
+     *
+     * @param value the value in centimetres
+     * @return the quantity
+     */
+    public static Length cm(double value) {
+        return Length.ofCentimetres(value);
+    }
+
+    /**
+     * A length in millimetres; same as {@link Length#ofMillimetres(double)}.
+     *
+     * @param value the value in millimetres
+     * @return the quantity
+     */
+    public static Length mm(double value) {
+        return Length.ofMillimetres(value);
+    }
+
+    /**
+     * A length in micrometres; same as {@link Length#ofMicrometres(double)}.
+     *
+     * @param value the value in micrometres
+     * @return the quantity
+     */
+    public static Length um(double value) {
+        return Length.ofMicrometres(value);
+    }
+
+    /**
+     * A length in nanometres; same as {@link Length#ofNanometres(double)}.
+     *
+     * @param value the value in nanometres
+     * @return the quantity
+     */
+    public static Length nm(double value) {
+        return Length.ofNanometres(value);
+    }
+
+    /**
+     * A length in mils; same as {@link Length#ofMils(double)}.
+     *
+     * @param value the value in mils
+     * @return the quantity
+     */
+    public static Length mil(double value) {
+        return Length.ofMils(value);
+    }
+
+    /**
+     * A length in inches; same as {@link Length#ofInches(double)}.
+     *
+     * @param value the value in inches
+     * @return the quantity
+     */
+    public static Length inch(double value) {
+        return Length.ofInches(value);
+    }
+
+    /**
+     * A conductivity in S/m; same as {@link Conductivity#ofSiemensPerMetre(double)}.
+     *
+     * @param value the value in S/m
+     * @return the quantity
+     */
+    public static Conductivity siemensPerMetre(double value) {
+        return Conductivity.ofSiemensPerMetre(value);
+    }
+
+    /**
+     * A conductivity in MS/m; same as {@link Conductivity#ofMegasiemensPerMetre(double)}.
+     *
+     * @param value the value in MS/m
+     * @return the quantity
+     */
+    public static Conductivity megasiemensPerMetre(double value) {
+        return Conductivity.ofMegasiemensPerMetre(value);
+    }
+
+    /**
+     * A conductivity in % IACS; same as {@link Conductivity#ofPercentIacs(double)}.
+     *
+     * @param value the value in % IACS
+     * @return the quantity
+     */
+    public static Conductivity iacs(double value) {
+        return Conductivity.ofPercentIacs(value);
+    }
+
+    /**
+     * A sheet resistance in Ω/sq; same as {@link SheetResistance#ofOhmsPerSquare(double)}.
+     *
+     * @param value the value in Ω/sq
+     * @return the quantity
+     */
+    public static SheetResistance ohmsPerSquare(double value) {
+        return SheetResistance.ofOhmsPerSquare(value);
+    }
+
+    /**
+     * A magnetic field strength in A/m; same as {@link MagneticFieldStrength#ofAmperesPerMetre(double)}.
+     *
+     * @param value the value in A/m
+     * @return the quantity
+     */
+    public static MagneticFieldStrength amperesPerMetre(double value) {
+        return MagneticFieldStrength.ofAmperesPerMetre(value);
+    }
+
+    /**
+     * A magnetic field strength in oersteds; same as {@link MagneticFieldStrength#ofOersteds(double)}.
+     *
+     * @param value the value in oersteds
+     * @return the quantity
+     */
+    public static MagneticFieldStrength oersted(double value) {
+        return MagneticFieldStrength.ofOersteds(value);
+    }
+
+    /**
+     * A magnetic flux density in tesla; same as {@link MagneticFluxDensity#ofTesla(double)}.
+     *
+     * @param value the value in tesla
+     * @return the quantity
+     */
+    public static MagneticFluxDensity tesla(double value) {
+        return MagneticFluxDensity.ofTesla(value);
+    }
+
+    /**
+     * A magnetic flux density in millitesla; same as {@link MagneticFluxDensity#ofMillitesla(double)}.
+     *
+     * @param value the value in millitesla
+     * @return the quantity
+     */
+    public static MagneticFluxDensity mT(double value) {
+        return MagneticFluxDensity.ofMillitesla(value);
+    }
+
+    /**
+     * A magnetic flux density in microtesla; same as {@link MagneticFluxDensity#ofMicrotesla(double)}.
+     *
+     * @param value the value in microtesla
+     * @return the quantity
+     */
+    public static MagneticFluxDensity uT(double value) {
+        return MagneticFluxDensity.ofMicrotesla(value);
+    }
+
+    /**
+     * A magnetic flux density in nanotesla; same as {@link MagneticFluxDensity#ofNanotesla(double)}.
+     *
+     * @param value the value in nanotesla
+     * @return the quantity
+     */
+    public static MagneticFluxDensity nT(double value) {
+        return MagneticFluxDensity.ofNanotesla(value);
+    }
+
+    /**
+     * A magnetic flux density in gauss; same as {@link MagneticFluxDensity#ofGauss(double)}.
+     *
+     * @param value the value in gauss
+     * @return the quantity
+     */
+    public static MagneticFluxDensity gauss(double value) {
+        return MagneticFluxDensity.ofGauss(value);
+    }
+}

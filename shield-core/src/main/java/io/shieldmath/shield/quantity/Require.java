@@ -1,0 +1,106 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.quantity;
+
+/**
+ * Boundary checks that throw {@link InvalidQuantityException} with the quantity, the
+ * value, the unit and the allowed range in the message. Used by every factory in this
+ * library; open to model implementations outside it.
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class Require {
+
+    private Require() {
+    }
+
+    /**
+     * Requires a finite value greater than zero.
+     *
+     * @param quantity the quantity's name for the message
+     * @param value    the value to check
+     * @param unit     the unit the value is expressed in, for the message
+     * @return {@code value}
+     * @throws InvalidQuantityException if {@code value} is NaN, infinite, zero or negative
+     */
+    public static double positive(String quantity, double value, String unit) {
+        if (!(value > 0) || value == Double.POSITIVE_INFINITY) {
+            throw new InvalidQuantityException(quantity, show(value, unit),
+                    "finite and greater than 0 " + unit);
+        }
+        return value;
+    }
+
+    /**
+     * Requires a finite value of zero or more.
+     *
+     * @param quantity the quantity's name for the message
+     * @param value    the value to check
+     * @param unit     the unit the value is expressed in, for the message
+     * @return {@code value} (a negative zero becomes positive zero)
+     * @throws InvalidQuantityException if {@code value} is NaN, infinite or negative
+     */
+    public static double nonNegative(String quantity, double value, String unit) {
+        if (!(value >= 0) || value == Double.POSITIVE_INFINITY) {
+            throw new InvalidQuantityException(quantity, show(value, unit),
+                    "finite and 0 " + unit + " or more");
+        }
+        return value + 0.0;
+    }
+
+    /**
+     * Requires a finite value.
+     *
+     * @param quantity the quantity's name for the message
+     * @param value    the value to check
+     * @param unit     the unit the value is expressed in, for the message
+     * @return {@code value}
+     * @throws InvalidQuantityException if {@code value} is NaN or infinite
+     */
+    public static double finite(String quantity, double value, String unit) {
+        if (!Double.isFinite(value)) {
+            throw new InvalidQuantityException(quantity, show(value, unit), "a finite number of " + unit);
+        }
+        return value;
+    }
+
+    /**
+     * Requires a finite value within a closed range.
+     *
+     * @param quantity the quantity's name for the message
+     * @param value    the value to check
+     * @param min      the smallest allowed value, in {@code unit}
+     * @param max      the largest allowed value, in {@code unit}
+     * @param unit     the unit of {@code value}, {@code min} and {@code max}
+     * @return {@code value}
+     * @throws InvalidQuantityException if {@code value} is NaN or outside [min, max]
+     */
+    public static double inRange(String quantity, double value, double min, double max, String unit) {
+        if (!(value >= min && value <= max)) {
+            throw new InvalidQuantityException(quantity, show(value, unit),
+                    "from " + Text.number(min) + " " + unit + " to " + Text.number(max) + " " + unit);
+        }
+        return value;
+    }
+
+    /**
+     * Requires a non-null argument.
+     *
+     * @param <T>      the argument's type
+     * @param quantity the argument's name for the message
+     * @param value    the argument
+     * @return {@code value}
+     * @throws NullPointerException if {@code value} is null, with the name in the message
+     */
+    public static <T> T nonNull(String quantity, T value) {
+        if (value == null) {
+            throw new NullPointerException(quantity + " must not be null");
+        }
+        return value;
+    }
+
+    static String show(double value, String unit) {
+        return Text.number(value) + " " + unit;
+    }
+}

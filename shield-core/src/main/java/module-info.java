@@ -1,0 +1,16 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+
+/**
+ * shield-core: typed quantities, incident fields, layered barriers and the shielding
+ * models. Its only runtime dependency is Apache Commons Math.
+ */
+module io.shieldmath.shield.core {
+    requires transitive commons.math3;
+
+    exports io.shieldmath.shield.quantity;
+    exports io.shieldmath.shield.medium;
+    exports io.shieldmath.shield.field;
+    exports io.shieldmath.shield.planar;
+}
