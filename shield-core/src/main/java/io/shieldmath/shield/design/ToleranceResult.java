@@ -1,0 +1,129 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.design;
+
+import io.shieldmath.shield.quantity.Require;
+import java.util.Arrays;
+import java.util.Locale;
+
+/**
+ * The distribution of SE from a {@link ToleranceStudy}. Immutable and thread-safe.
+ */
+public final class ToleranceResult {
+
+    private final double nominalDb;
+    private final double targetDb;
+    private final double[] sorted;
+    private final double mean;
+    private final double standardDeviation;
+    private final double probability;
+
+    ToleranceResult(double nominalDb, double targetDb, double[] values) {
+        this.nominalDb = nominalDb;
+        this.targetDb = targetDb;
+        this.sorted = values.clone();
+        Arrays.sort(sorted);
+        double sum = 0;
+        for (double v : sorted) {
+            sum += v;
+        }
+        double m = sum / sorted.length;
+        double ss = 0;
+        long meeting = 0;
+        for (double v : sorted) {
+            ss += (v - m) * (v - m);
+            if (v >= targetDb) {
+                meeting++;
+            }
+        }
+        this.mean = m;
+        this.standardDeviation = sorted.length > 1 ? Math.sqrt(ss / (sorted.length - 1)) : 0;
+        this.probability = (double) meeting / sorted.length;
+    }
+
+    /**
+     * The SE of the nominal design, dB.
+     *
+     * @return the nominal SE
+     */
+    public double nominalDb() {
+        return nominalDb;
+    }
+
+    /**
+     * The mean SE of the samples, dB.
+     *
+     * @return the mean
+     */
+    public double meanDb() {
+        return mean;
+    }
+
+    /**
+     * The sample standard deviation of SE, dB.
+     *
+     * @return the standard deviation (0 for one sample)
+     */
+    public double standardDeviationDb() {
+        return standardDeviation;
+    }
+
+    /**
+     * A percentile of SE, interpolated linearly between order statistics (the R-7 /
+     * spreadsheet definition: position (n − 1)·p/100).
+     *
+     * @param percent the percentile, from 0 to 100
+     * @return the SE below which {@code percent} % of the samples lie, dB
+     */
+    public double percentileDb(double percent) {
+        Require.inRange("percentile", percent, 0, 100, "%");
+        double pos = (sorted.length - 1) * percent / 100;
+        int i = (int) Math.floor(pos);
+        int j = Math.min(sorted.length - 1, i + 1);
+        return sorted[i] + (pos - i) * (sorted[j] - sorted[i]);
+    }
+
+    /**
+     * The fraction of samples whose SE meets the target.
+     *
+     * @return from 0 to 1
+     */
+    public double probabilityOfMeeting() {
+        return probability;
+    }
+
+    /**
+     * The target SE, dB.
+     *
+     * @return the target
+     */
+    public double targetDb() {
+        return targetDb;
+    }
+
+    /**
+     * The number of samples.
+     *
+     * @return the count
+     */
+    public int samples() {
+        return sorted.length;
+    }
+
+    /**
+     * The sample values in increasing order.
+     *
+     * @return a copy
+     */
+    public double[] sortedValuesDb() {
+        return sorted.clone();
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "%d samples: mean %.2f dB, sd %.2f dB, 5 %% %.2f dB, 95 %% %.2f dB, "
+                + "P(SE ≥ %.1f dB) = %.3f", sorted.length, mean, standardDeviation, percentileDb(5),
+                percentileDb(95), targetDb, probability);
+    }
+}
