@@ -28,7 +28,7 @@ import org.junit.jupiter.api.Test;
  */
 class PlanarProperties {
 
-    private static final int TRIES = 10_000;
+    private static final int TRIES = Integer.getInteger("shield.tries", 10_000);
 
     /** A random case: stack, field, frequency. */
     record Case(Barrier barrier, IncidentField field, double hz) {
