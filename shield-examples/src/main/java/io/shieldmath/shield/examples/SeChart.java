@@ -1,0 +1,93 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.examples;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Rectangle;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import org.jfree.chart.ChartUtils;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.LogAxis;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.renderer.xy.XYStepRenderer;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.SVGUtils;
+
+/**
+ * Plots of shielding effectiveness against frequency (log axis) for several designs,
+ * with the requirement drawn as a dashed step line, written headless as PNG and SVG with
+ * JFreeChart and JFreeSVG.
+ */
+public final class SeChart {
+
+    /** One curve: a name, frequencies in Hz and SE in dB. */
+    public record Curve(String name, double[] hertz, double[] db) {
+    }
+
+    private SeChart() {
+    }
+
+    /**
+     * Writes the chart as PNG and SVG.
+     *
+     * @param png         the PNG file to write
+     * @param svg         the SVG file to write
+     * @param title       the chart title
+     * @param curves      the designs' curves
+     * @param requirement the requirement as a curve (step line), or null for none
+     * @throws IOException if a file cannot be written
+     */
+    public static void write(Path png, Path svg, String title, List<Curve> curves, Curve requirement)
+            throws IOException {
+        System.setProperty("java.awt.headless", "true");
+        XYSeriesCollection designs = new XYSeriesCollection();
+        for (Curve c : curves) {
+            designs.addSeries(series(c));
+        }
+        LogAxis frequency = new LogAxis("frequency (Hz)");
+        frequency.setBase(10);
+        frequency.setSmallestValue(1e-3);
+        NumberAxis se = new NumberAxis("shielding effectiveness (dB)");
+        XYLineAndShapeRenderer lines = new XYLineAndShapeRenderer(true, false);
+        for (int i = 0; i < curves.size(); i++) {
+            lines.setSeriesStroke(i, new BasicStroke(2f));
+        }
+        XYPlot plot = new XYPlot(designs, frequency, se, lines);
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(Color.LIGHT_GRAY);
+        plot.setRangeGridlinePaint(Color.LIGHT_GRAY);
+        if (requirement != null) {
+            XYSeriesCollection need = new XYSeriesCollection(series(requirement));
+            XYStepRenderer step = new XYStepRenderer();
+            step.setSeriesPaint(0, Color.BLACK);
+            step.setSeriesStroke(0, new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                    new float[] {8f, 5f}, 0f));
+            plot.setDataset(1, need);
+            plot.setRenderer(1, step);
+        }
+        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+        chart.setBackgroundPaint(Color.WHITE);
+        int w = 1000;
+        int h = 620;
+        ChartUtils.saveChartAsPNG(png.toFile(), chart, w, h);
+        SVGGraphics2D g = new SVGGraphics2D(w, h);
+        chart.draw(g, new Rectangle(0, 0, w, h));
+        SVGUtils.writeToSVG(svg.toFile(), g.getSVGElement());
+    }
+
+    private static XYSeries series(Curve c) {
+        XYSeries s = new XYSeries(c.name(), false, true);
+        for (int i = 0; i < c.hertz().length; i++) {
+            s.add(c.hertz()[i], c.db()[i]);
+        }
+        return s;
+    }
+}
