@@ -14,4 +14,5 @@ module io.shieldmath.shield.core {
     exports io.shieldmath.shield.field;
     exports io.shieldmath.shield.planar;
     exports io.shieldmath.shield.design;
+    exports io.shieldmath.shield.enclosure;
 }

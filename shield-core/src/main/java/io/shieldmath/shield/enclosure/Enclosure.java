@@ -1,0 +1,163 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.enclosure;
+
+import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.quantity.Require;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A shell with openings: the wall and every opening are leakage paths, combined as field
+ * amplitudes (see {@link PathSum}), so an enclosure is only as good as its worst path.
+ *
+ * <pre>{@code
+ * Enclosure box = Enclosure.of(Shell.box(cm(30), cm(20), cm(15)).wall(aluminium, mm(1.5)))
+ *         .withOpening(Opening.holes(mm(4), 120).named("vent"))
+ *         .withOpening(Opening.seam(cm(8)).named("lid seam"));
+ * EnclosureResult r = box.facing(IncidentField.planeWave()).at(MHz(300));
+ * r.totalDb();       // SE of the enclosure
+ * r.limitingPath();  // the path that lets most field in
+ * }</pre>
+ *
+ * <p>Three questions, three entry points:
+ * <ul>
+ *   <li>{@link #facing(IncidentField)}: an incident wave (plane wave, or an electric or
+ *       magnetic near field) at radio frequencies. The wall is the flat planar barrier of
+ *       the shell's layers in that field (the transmission-line model of the planar
+ *       package), the openings follow the aperture rules.</li>
+ *   <li>{@link #inUniformField()}: a uniform alternating magnetic field, enclosure small
+ *       against the wavelength. The wall is the shell model, the holes leak by Bethe's
+ *       polarizability.</li>
+ *   <li>{@link #staticShielding()}: the same for a static field.</li>
+ * </ul>
+ * See {@link Opening} for the opening models and their assumptions.
+ *
+ * <p>Immutable and thread-safe; {@code with…} return a new enclosure and leave this one untouched.
+ */
+public final class Enclosure {
+
+    /** The most openings on one enclosure. */
+    public static final int MAX_OPENINGS = 256;
+
+    private final Shell shell;
+    private final List<Opening> openings;
+    private final PathSum sum;
+
+    private Enclosure(Shell shell, List<Opening> openings, PathSum sum) {
+        this.shell = shell;
+        this.openings = List.copyOf(openings);
+        this.sum = sum;
+    }
+
+    /**
+     * A closed enclosure of a shell, no openings yet, worst-case path sum.
+     *
+     * @param shell the shell, not null
+     * @return the enclosure
+     */
+    public static Enclosure of(Shell shell) {
+        return new Enclosure(Require.nonNull("shell", shell), List.of(), PathSum.MAGNITUDES);
+    }
+
+    /**
+     * This enclosure with one more opening.
+     *
+     * @param opening the opening, not null
+     * @return the new enclosure
+     * @throws IllegalArgumentException if it would have more than {@value #MAX_OPENINGS} openings
+     */
+    public Enclosure withOpening(Opening opening) {
+        Require.nonNull("opening", opening);
+        if (openings.size() >= MAX_OPENINGS) {
+            throw new IllegalArgumentException("an enclosure has at most " + MAX_OPENINGS + " openings");
+        }
+        List<Opening> l = new ArrayList<>(openings);
+        l.add(opening);
+        return new Enclosure(shell, l, sum);
+    }
+
+    /**
+     * This enclosure with another way of combining the paths.
+     *
+     * @param pathSum the combination, not null
+     * @return the new enclosure, or this one if unchanged
+     */
+    public Enclosure withPathSum(PathSum pathSum) {
+        Require.nonNull("path sum", pathSum);
+        return pathSum == sum ? this : new Enclosure(shell, openings, pathSum);
+    }
+
+    /**
+     * The shell.
+     *
+     * @return the shell
+     */
+    public Shell shell() {
+        return shell;
+    }
+
+    /**
+     * The openings.
+     *
+     * @return an unmodifiable list
+     */
+    public List<Opening> openings() {
+        return openings;
+    }
+
+    /**
+     * How the paths are combined.
+     *
+     * @return the path sum
+     */
+    public PathSum pathSum() {
+        return sum;
+    }
+
+    /**
+     * This enclosure facing an incident wave: planar wall, aperture rules.
+     *
+     * @param field the incident field, not null
+     * @return the evaluation
+     */
+    public EnclosureEvaluation facing(IncidentField field) {
+        return new EnclosureEvaluation(this, Require.nonNull("field", field));
+    }
+
+    /**
+     * This enclosure in a uniform alternating magnetic field: shell wall, Bethe holes.
+     *
+     * @return the evaluation
+     */
+    public EnclosureEvaluation inUniformField() {
+        return new EnclosureEvaluation(this, null);
+    }
+
+    /**
+     * This enclosure in a uniform static magnetic field: the exact static shell (µ'(0))
+     * and Bethe holes.
+     *
+     * @return the result
+     */
+    public EnclosureResult staticShielding() {
+        return EnclosureEvaluation.combine(this, null, shell.staticShielding().totalDb(), "static shell, exact",
+                0, false);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Enclosure e && e.shell.equals(shell) && e.openings.equals(openings) && e.sum == sum;
+    }
+
+    @Override
+    public int hashCode() {
+        return (shell.hashCode() * 31 + openings.hashCode()) * 31 + sum.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return shell + " with " + openings.size() + " openings";
+    }
+}

@@ -1,0 +1,171 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.enclosure;
+
+import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.PhysicalConstants;
+import io.shieldmath.shield.quantity.RelativePermeability;
+import io.shieldmath.shield.quantity.ShieldingFactor;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.math3.complex.Complex;
+
+/**
+ * The shielding of a shell in a uniform alternating field at one frequency: the complex
+ * shielding factor S (applied field over the field at the centre, time convention
+ * e^{jωt}), |S| in dB, and Kaden's thin-shell closed form of each wall alone for
+ * comparison.
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class ShellResult {
+
+    /** Above this k0·R (free-space wavenumber times outer radius) the quasi-static model is flagged. */
+    public static final double QUASI_STATIC_LIMIT = 0.1;
+
+    private final Shell shell;
+    private final Frequency frequency;
+    private final double logS;
+    private final double phase;
+
+    ShellResult(Shell shell, Frequency frequency, double logS, double phase) {
+        this.shell = shell;
+        this.frequency = frequency;
+        this.logS = logS;
+        this.phase = phase;
+    }
+
+    /**
+     * The shell.
+     *
+     * @return the shell
+     */
+    public Shell shell() {
+        return shell;
+    }
+
+    /**
+     * The frequency.
+     *
+     * @return f
+     */
+    public Frequency frequency() {
+        return frequency;
+    }
+
+    /**
+     * |S| in dB, 20·log10|S|, finite for any wall thickness.
+     *
+     * @return SE in dB
+     */
+    public double totalDb() {
+        return StaticShielding.DB_PER_NEPER * logS;
+    }
+
+    /**
+     * |S| in dB.
+     *
+     * @return SE
+     */
+    public Decibels shieldingEffectiveness() {
+        return Decibels.of(totalDb());
+    }
+
+    /**
+     * The magnitude |S|.
+     *
+     * @return |S|
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if |S| does not fit a double (above about
+     *                                  6160 dB; use {@link #totalDb()})
+     */
+    public ShieldingFactor magnitude() {
+        return ShieldingFactor.from(shieldingEffectiveness());
+    }
+
+    /**
+     * The complex shielding factor S. Its magnitude overflows to infinity above about
+     * 6160 dB; use {@link #totalDb()} and {@link #phase()} there.
+     *
+     * @return S
+     */
+    public Complex shieldingFactor() {
+        double m = Math.exp(logS);
+        return new Complex(m * Math.cos(phase), m * Math.sin(phase));
+    }
+
+    /**
+     * arg S in radians, in (−π, π]: the phase lag of the field inside behind the applied field.
+     *
+     * @return arg S
+     */
+    public double phase() {
+        return phase;
+    }
+
+    /**
+     * Kaden's thin-shell factor of one wall alone (see the package notes for the formulas),
+     * with that wall's µr at this frequency.
+     *
+     * @param wall the wall's index, 0 for the innermost
+     * @return S of that wall by the thin-shell formula (infinite above about 6160 dB; see
+     *         {@link #thinShellDb(int)})
+     * @throws IndexOutOfBoundsException if there is no such wall
+     */
+    public Complex thinShellFactor(int wall) {
+        return logThin(wall).exp();
+    }
+
+    /**
+     * Kaden's thin-shell factor of one wall alone, in dB.
+     *
+     * @param wall the wall's index, 0 for the innermost
+     * @return 20·log10|S| by the thin-shell formula
+     * @throws IndexOutOfBoundsException if there is no such wall
+     */
+    public double thinShellDb(int wall) {
+        return StaticShielding.DB_PER_NEPER * logThin(wall).getReal();
+    }
+
+    private Complex logThin(int wall) {
+        Wall w = shell.walls().get(wall);
+        RelativePermeability mu = w.medium().permeabilityAt(frequency);
+        return Kaden.logFactor(shell.geometry(), new Complex(mu.real(), -mu.loss()),
+                w.medium().conductivity().toSiemensPerMetre(), frequency.angular(), w.meanMetres(),
+                w.thicknessMetres());
+    }
+
+    /**
+     * Whether the quasi-static assumption holds: k0·R ≤ {@value #QUASI_STATIC_LIMIT},
+     * with k0 = 2πf/c and R the outer radius. Above it displacement currents and cavity
+     * resonances, which this model leaves out, start to matter.
+     *
+     * @return true if quasi-static
+     */
+    public boolean isQuasiStatic() {
+        return frequency.angular() / PhysicalConstants.SPEED_OF_LIGHT * shell.outerRadius().toMetres()
+                <= QUASI_STATIC_LIMIT;
+    }
+
+    /**
+     * Plain-text warnings about the validity of this result (empty if none).
+     *
+     * @return an unmodifiable list
+     */
+    public List<String> warnings() {
+        List<String> w = new ArrayList<>();
+        if (!isQuasiStatic()) {
+            w.add("the shell is not small against the wavelength at " + frequency + " (k0·R above "
+                    + QUASI_STATIC_LIMIT + "): the quasi-static shell model leaves out displacement currents and "
+                    + "cavity resonances; treat the result as an estimate");
+        }
+        return List.copyOf(w);
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "|S| %.2f dB, arg S %.3f rad at %s", totalDb(), phase, frequency);
+    }
+}
