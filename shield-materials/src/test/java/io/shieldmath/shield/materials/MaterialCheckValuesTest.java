@@ -131,9 +131,10 @@ class MaterialCheckValuesTest {
 
     /**
      * Across 10 Hz to 100 kHz the frequency-dependent model takes away more and more of what a constant
-     * low-frequency µr would promise: at 10 Hz and 100 Hz the two agree within 1 dB (µr there is near its
-     * low-frequency value), and from 1 kHz on the overstatement grows with every decade (DOMAIN §1, §6;
-     * common practice, no source).
+     * low-frequency µr would promise: up to 1 kHz the two agree within 2 dB (µr there is near its
+     * low-frequency value; the loss part µ'' even adds a little absorption), at 10 kHz the constant model
+     * overstates the plate by more than 20 dB, and at 100 kHz by more still (DOMAIN §1, §6; common
+     * practice, no source).
      */
     @Test
     void overstatementOfConstantPermeabilityGrowsAcrossTheBand() {
@@ -147,10 +148,10 @@ class MaterialCheckValuesTest {
         double[] a = real.totalDb();
         double[] b = flat.totalDb();
         String text = java.util.Arrays.toString(a) + " vs " + java.util.Arrays.toString(b);
-        assertEquals(b[0], a[0], 1.0, text);
-        assertEquals(b[1], a[1], 1.0, text);
-        assertTrue(b[2] - a[2] > 1, text);
-        assertTrue(b[3] - a[3] > b[2] - a[2], text);
+        assertEquals(b[0], a[0], 2.0, text);
+        assertEquals(b[1], a[1], 2.0, text);
+        assertEquals(b[2], a[2], 2.0, text);
+        assertTrue(b[3] - a[3] > 20, text);
         assertTrue(b[4] - a[4] > b[3] - a[3], text);
     }
 }
