@@ -26,6 +26,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.BiFunction;
 import java.util.function.Function;
 import java.util.function.Supplier;
 import java.util.regex.Matcher;
@@ -103,13 +104,7 @@ final class Json {
         Node nameNode = f.required("name");
         Material.Builder b = nameNode.convert(s -> Material.builder(id, s), nameNode.string());
 
-        Node sigma = f.optional("conductivity");
-        if (sigma != null) {
-            Node.Fields v = sigma.object(VALUE_FIELDS);
-            Conductivity c = v.required("value").quantity(Conductivity::parse, "58 MS/m");
-            String src = source(v);
-            at(sigma, () -> b.conductivity(c, src));
-        }
+        valued(f, "conductivity", false, Conductivity::parse, "58 MS/m", b::conductivity);
         Node sheet = f.optional("sheetResistance");
         if (sheet != null) {
             Node.Fields v = sheet.object(SHEET_FIELDS);
@@ -118,13 +113,7 @@ final class Json {
             String src = source(v);
             at(sheet, () -> b.sheetResistance(rs, t, src));
         }
-        Node alpha = f.optional("temperatureCoefficient");
-        if (alpha != null) {
-            Node.Fields v = alpha.object(VALUE_FIELDS);
-            double a = v.required("value").quantity(Json::perKelvin, "0.00393 /K");
-            String src = source(v);
-            at(alpha, () -> b.temperatureCoefficient(a, src));
-        }
+        valued(f, "temperatureCoefficient", false, Json::perKelvin, "0.00393 /K", b::temperatureCoefficient);
         Node mu = f.required("permeability");
         PermeabilityModel model = readPermeability(mu, true);
         String muSource = source(new Node.Fields(mu));
@@ -134,24 +123,27 @@ final class Json {
         RelativePermittivity epsilon = permittivity(ev.required("value"));
         String epsSource = source(ev);
         at(eps, () -> b.permittivity(epsilon, epsSource));
-        Node rho = f.required("density");
-        Node.Fields dv = rho.object(VALUE_FIELDS);
-        Density d = dv.required("value").quantity(Density::parse, "8890 kg/m3");
-        String dSource = source(dv);
-        at(rho, () -> b.density(d, dSource));
-        Node bs = f.optional("saturation");
-        if (bs != null) {
-            Node.Fields v = bs.object(VALUE_FIELDS);
-            MagneticFluxDensity sat = v.required("value").quantity(MagneticFluxDensity::parse, "0.75 T");
-            String src = source(v);
-            at(bs, () -> b.saturation(sat, src));
-        }
+        valued(f, "density", true, Density::parse, "8890 kg/m3", b::density);
+        valued(f, "saturation", false, MagneticFluxDensity::parse, "0.75 T", b::saturation);
         Node note = f.optional("note");
         if (note != null) {
             String text = note.string();
             at(note, () -> b.note(text));
         }
         return at(n, b::build);
+    }
+
+    /** Reads a {@code {"value": ..., "source": ...}} property and hands both to a builder step. */
+    private static <Q> void valued(Node.Fields f, String key, boolean required, Function<String, Q> parse,
+                                   String example, BiFunction<Q, String, Material.Builder> step) {
+        Node n = required ? f.required(key) : f.optional(key);
+        if (n == null) {
+            return;
+        }
+        Node.Fields v = n.object(VALUE_FIELDS);
+        Q q = v.required("value").quantity(parse, example);
+        String src = source(v);
+        at(n, () -> step.apply(q, src));
     }
 
     private static String source(Node.Fields v) {

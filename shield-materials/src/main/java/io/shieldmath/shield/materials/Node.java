@@ -191,7 +191,7 @@ final class Node {
                     return new Node(Type.STRING, at, line, col, parser.getString(), null, null);
                 case VALUE_NUMBER_INT:
                 case VALUE_NUMBER_FLOAT:
-                    return new Node(Type.NUMBER, at, line, col, parser.getText(), null, null);
+                    return new Node(Type.NUMBER, at, line, col, parser.getString(), null, null);
                 case VALUE_TRUE:
                 case VALUE_FALSE:
                     return new Node(Type.BOOLEAN, at, line, col, Boolean.toString(t == JsonToken.VALUE_TRUE), null,
