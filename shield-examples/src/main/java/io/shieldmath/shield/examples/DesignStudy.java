@@ -4,13 +4,12 @@
 package io.shieldmath.shield.examples;
 
 import static io.shieldmath.shield.quantity.Quantities.cm;
-import static io.shieldmath.shield.quantity.Quantities.iacs;
 import static io.shieldmath.shield.quantity.Quantities.mm;
 
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.field.ImpedanceForm;
-import io.shieldmath.shield.medium.Medium;
-import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.quantity.Frequency;
@@ -21,7 +20,9 @@ import java.util.Map;
 
 /**
  * The main example: a few candidate plates in front of a magnetic source, evaluated over
- * frequency and printed as a table. All numbers are illustrative, invented for the demo.
+ * frequency and printed as a table. The materials come from the built-in catalogue (typical
+ * handbook values with their sources, see {@link Catalogue}); the scenario is invented for
+ * the demo.
  */
 public final class DesignStudy {
 
@@ -43,12 +44,11 @@ public final class DesignStudy {
      * @param out where the report goes
      */
     public static void run(PrintStream out) {
-        // Illustrative materials (typical handbook values, see DOMAIN §6; not catalogue data).
-        Medium copper = Medium.conductor("copper", iacs(100), 1);
-        Medium aluminium = Medium.conductor("aluminium", iacs(61), 1);
-        Medium stainless = Medium.conductor("stainless 304", iacs(2.4), 1);
-        Medium nickelIron = Medium.conductor("80 % nickel-iron", iacs(2.9),
-                PermeabilityModel.relaxation(60_000, Frequency.ofHertz(300)));
+        Catalogue catalogue = Catalogue.builtIn();
+        Material copper = catalogue.get("copper-annealed");
+        Material aluminium = catalogue.get("aluminium-1100-o");
+        Material stainless = catalogue.get("stainless-304");
+        Material nickelIron = catalogue.get("nickel-iron-80");
 
         Map<String, Barrier> candidates = new LinkedHashMap<>();
         candidates.put("copper 0.5 mm", Barrier.of(copper, mm(0.5)));
@@ -61,7 +61,7 @@ public final class DesignStudy {
         double[] hz = {50, 1e3, 1e4, 2e4, 1e5, 1e6};
 
         out.println("shield: candidate plates 6 cm from a magnetic (loop) source, exact dipole wave impedance");
-        out.println("Illustrative scenario and materials, invented for this example.");
+        out.println("Invented scenario; materials from the built-in catalogue (typical values, see its sources).");
         out.println();
         StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%-28s", "barrier  \\  SE (dB) at"));
         for (double f : hz) {

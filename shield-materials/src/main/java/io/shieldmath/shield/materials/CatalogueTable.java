@@ -1,0 +1,172 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.materials;
+
+import io.shieldmath.shield.medium.ConstantPermeability;
+import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.medium.RelaxationPermeability;
+import io.shieldmath.shield.medium.TabulatedPermeability;
+import io.shieldmath.shield.quantity.Require;
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Prints a catalogue as a Markdown table with numbered sources, the table of the README,
+ * generated from the catalogue resource so that it cannot drift from it.
+ *
+ * <pre>
+ * java -p ... -m io.shieldmath.shield.materials/io.shieldmath.shield.materials.CatalogueTable            (print)
+ * java -p ... -m io.shieldmath.shield.materials/io.shieldmath.shield.materials.CatalogueTable README.md  (rewrite)
+ * </pre>
+ *
+ * With a file argument, the text between the lines {@value #START} and {@value #END} is
+ * replaced. Stateless and thread-safe.
+ */
+public final class CatalogueTable {
+
+    /** The line that opens the generated table in a Markdown file. */
+    public static final String START = "<!-- catalogue:start -->";
+    /** The line that closes the generated table in a Markdown file. */
+    public static final String END = "<!-- catalogue:end -->";
+
+    private CatalogueTable() {
+    }
+
+    /**
+     * Prints the built-in catalogue's table, or rewrites it in a Markdown file.
+     *
+     * @param args nothing to print to standard output, or the path of a Markdown file whose
+     *             marked section is replaced
+     * @throws IOException if the file cannot be read or written
+     */
+    public static void main(String[] args) throws IOException {
+        String table = markdown(Catalogue.builtIn());
+        if (args.length == 0) {
+            System.out.print(table);
+            return;
+        }
+        Path file = Path.of(args[0]);
+        String text = Files.readString(file, StandardCharsets.UTF_8);
+        Files.writeString(file, replaceSection(text, table), StandardCharsets.UTF_8);
+    }
+
+    /**
+     * Replaces the text between the {@value #START} and {@value #END} lines.
+     *
+     * @param document the Markdown document, not null, holding both markers in order
+     * @param table    the new section, not null
+     * @return the new document
+     * @throws IllegalArgumentException if the markers are missing
+     */
+    public static String replaceSection(String document, String table) {
+        int a = Require.nonNull("document", document).indexOf(START);
+        int b = document.indexOf(END);
+        if (a < 0 || b < a) {
+            throw new IllegalArgumentException("the document has no " + START + " ... " + END + " section");
+        }
+        return document.substring(0, a + START.length()) + "\n" + table + document.substring(b);
+    }
+
+    /**
+     * The text between the {@value #START} and {@value #END} lines of a document.
+     *
+     * @param document the Markdown document, not null
+     * @return the section, without the marker lines
+     * @throws IllegalArgumentException if the markers are missing
+     */
+    public static String section(String document) {
+        int a = Require.nonNull("document", document).indexOf(START);
+        int b = document.indexOf(END);
+        if (a < 0 || b < a) {
+            throw new IllegalArgumentException("the document has no " + START + " ... " + END + " section");
+        }
+        return document.substring(a + START.length() + 1, b);
+    }
+
+    /**
+     * The catalogue as a Markdown table followed by its numbered sources.
+     *
+     * @param catalogue the catalogue, not null
+     * @return the Markdown text, ending with a line break
+     */
+    public static String markdown(Catalogue catalogue) {
+        Require.nonNull("catalogue", catalogue);
+        Map<String, Integer> sources = new LinkedHashMap<>();
+        StringBuilder s = new StringBuilder();
+        s.append("| id | material | σ at 20 °C | α (1/K) | µr model | \\|µr\\| at 10 Hz / 10 kHz / 100 kHz "
+                + "| εr | density (kg/m³) | Bs |\n");
+        s.append("|---|---|---|---|---|---|---|---|---|\n");
+        for (Material m : catalogue.all()) {
+            List<String> cells = new ArrayList<>();
+            cells.add("`" + m.id() + "`");
+            cells.add(m.name());
+            if (m.sheetResistance().isPresent()) {
+                cells.add(m.sheetResistance().get() + " at " + m.nominalThickness().get()
+                        + ref(sources, m, MaterialProperty.SHEET_RESISTANCE));
+            } else {
+                double sigma = m.conductivity().toSiemensPerMetre();
+                String text = sigma == 0 ? "0" : digits(sigma / 1e6, 4) + " MS/m (" + digits(
+                        m.conductivity().toPercentIacs(), 4) + " % IACS)";
+                cells.add(text + ref(sources, m, MaterialProperty.CONDUCTIVITY));
+            }
+            cells.add(m.temperatureCoefficient().isPresent()
+                    ? digits(m.temperatureCoefficient().getAsDouble(), 4)
+                    + ref(sources, m, MaterialProperty.TEMPERATURE_COEFFICIENT) : "—");
+            cells.add(model(m.permeability()) + ref(sources, m, MaterialProperty.PERMEABILITY));
+            PermeabilityModel p = m.permeability();
+            cells.add(magnitude(p, 10) + " / " + magnitude(p, 1e4) + " / " + magnitude(p, 1e5));
+            cells.add(digits(m.permittivity().value(), 4) + ref(sources, m, MaterialProperty.PERMITTIVITY));
+            cells.add(digits(m.density().toKilogramsPerCubicMetre(), 4) + ref(sources, m, MaterialProperty.DENSITY));
+            cells.add(m.saturation().isPresent() ? m.saturation().get() + ref(sources, m, MaterialProperty.SATURATION)
+                    : "—");
+            s.append("| ").append(String.join(" | ", cells)).append(" |\n");
+        }
+        s.append("\nSources:\n\n");
+        for (Map.Entry<String, Integer> e : sources.entrySet()) {
+            s.append(e.getValue()).append(". ").append(e.getKey()).append('\n');
+        }
+        return s.toString();
+    }
+
+    private static String ref(Map<String, Integer> sources, Material m, MaterialProperty p) {
+        String text = m.source(p).orElseThrow();
+        Integer n = sources.computeIfAbsent(text, k -> sources.size() + 1);
+        return " [" + n + "]";
+    }
+
+    private static String model(PermeabilityModel p) {
+        if (p instanceof ConstantPermeability c) {
+            return "constant " + c.value();
+        }
+        if (p instanceof RelaxationPermeability r) {
+            return "relaxation, µdc " + digits(r.lowFrequencyValue(), 6) + ", fc " + r.corner();
+        }
+        if (p instanceof TabulatedPermeability t) {
+            double[] hz = t.frequencies();
+            return "table of " + hz.length + " points";
+        }
+        return p.toString();
+    }
+
+    private static String magnitude(PermeabilityModel p, double hz) {
+        return digits(Math.hypot(p.real(hz), p.loss(hz)), 3);
+    }
+
+    /** A value to a number of significant digits, without exponent or trailing zeros. */
+    static String digits(double v, int significant) {
+        if (v == 0) {
+            return "0";
+        }
+        BigDecimal d = new BigDecimal(v).round(new MathContext(significant)).stripTrailingZeros();
+        return d.scale() < 0 ? d.setScale(0).toPlainString() : d.toPlainString();
+    }
+}

@@ -1,0 +1,278 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.materials;
+
+import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.planar.Layer;
+import io.shieldmath.shield.planar.PlanarEvaluation;
+import io.shieldmath.shield.planar.PlanarSweep;
+import io.shieldmath.shield.quantity.FrequencyBand;
+import io.shieldmath.shield.quantity.InvalidQuantityException;
+import io.shieldmath.shield.quantity.Require;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * A planar shielding design a user keeps in a file: the layer stack (catalogue
+ * materials by identifier, inline media, air gaps), the incident field, and the band and
+ * number of points to sweep.
+ *
+ * <pre>{@code
+ * Catalogue cat = Catalogue.builtIn();
+ * Design d = Design.of(List.of(DesignLayer.of(cat.get("copper-annealed"), mm(0.3)),
+ *                              DesignLayer.gap(mm(2)),
+ *                              DesignLayer.of(cat.get("nickel-iron-80"), mm(0.5))),
+ *         IncidentField.magneticNearField(cm(6), ImpedanceForm.EXACT_DIPOLE),
+ *         FrequencyBand.parse("10 Hz to 100 kHz"), 41);
+ * d.write(Path.of("study.json"));
+ * PlanarSweep s = Design.read(Path.of("study.json"), cat).sweep();
+ * }</pre>
+ *
+ * <p>The file format is described in {@link #toJson()}. Results are estimates for an
+ * infinite flat sheet; real shields are limited by seams, openings and edges and must be
+ * verified by measurement.
+ *
+ * <p>Immutable and thread-safe; equality is by value. {@link #withTitle(String)} returns a
+ * copy.
+ */
+public final class Design {
+
+    /** The largest number of sweep points. */
+    public static final int MAX_POINTS = 10_000;
+
+    private final String title;
+    private final List<DesignLayer> layers;
+    private final IncidentField field;
+    private final FrequencyBand band;
+    private final int points;
+    private final Barrier barrier;
+
+    private Design(String title, List<DesignLayer> layers, IncidentField field, FrequencyBand band, int points) {
+        this.title = title;
+        this.layers = layers;
+        this.field = field;
+        this.band = band;
+        this.points = points;
+        List<Layer> core = new ArrayList<>(layers.size());
+        for (DesignLayer l : layers) {
+            core.add(l.toLayer());
+        }
+        this.barrier = Barrier.of(core);
+    }
+
+    /**
+     * Obtains a design without a title.
+     *
+     * @param layers the stack, source side first, 1 to {@value Barrier#MAX_LAYERS} layers, none null
+     * @param field  the incident field, not null
+     * @param band   the band to sweep, not null, within 1 µHz to 10 THz
+     * @param points the number of log-spaced sweep points, 1 to {@value #MAX_POINTS}
+     * @return the design
+     * @throws IllegalArgumentException if the stack is empty or too long, or points is out of range
+     * @throws InvalidQuantityException if the band is out of range
+     */
+    public static Design of(List<DesignLayer> layers, IncidentField field, FrequencyBand band, int points) {
+        Require.nonNull("layers", layers);
+        Require.nonNull("field", field);
+        Require.nonNull("band", band);
+        Require.inRange("band lower frequency", band.low().toHertz(), PlanarEvaluation.MIN_HERTZ,
+                PlanarEvaluation.MAX_HERTZ, "Hz");
+        Require.inRange("band upper frequency", band.high().toHertz(), PlanarEvaluation.MIN_HERTZ,
+                PlanarEvaluation.MAX_HERTZ, "Hz");
+        if (points < 1 || points > MAX_POINTS) {
+            throw new IllegalArgumentException("number of sweep points must be 1 to " + MAX_POINTS + "; got " + points);
+        }
+        return new Design("", List.copyOf(layers), field, band, points);
+    }
+
+    /**
+     * A copy with a title.
+     *
+     * @param newTitle the title, at most 200 characters without control characters; empty for none
+     * @return the new design; this one is unchanged
+     */
+    public Design withTitle(String newTitle) {
+        Require.nonNull("title", newTitle);
+        String t = newTitle.isBlank() ? "" : Material.checkText("design title", newTitle, 200);
+        return t.equals(title) ? this : new Design(t, layers, field, band, points);
+    }
+
+    /**
+     * The title.
+     *
+     * @return the title, empty if none
+     */
+    public String title() {
+        return title;
+    }
+
+    /**
+     * The layers as written, source side first.
+     *
+     * @return an unmodifiable list
+     */
+    public List<DesignLayer> layers() {
+        return layers;
+    }
+
+    /**
+     * The barrier for the planar engine.
+     *
+     * @return the barrier
+     */
+    public Barrier barrier() {
+        return barrier;
+    }
+
+    /**
+     * The incident field.
+     *
+     * @return the field
+     */
+    public IncidentField field() {
+        return field;
+    }
+
+    /**
+     * The band to sweep.
+     *
+     * @return the band
+     */
+    public FrequencyBand band() {
+        return band;
+    }
+
+    /**
+     * The number of log-spaced sweep points.
+     *
+     * @return 1 to {@value #MAX_POINTS}
+     */
+    public int points() {
+        return points;
+    }
+
+    /**
+     * Sweeps the design: {@code barrier().facing(field()).sweep(band(), points())}.
+     *
+     * @return the sweep, with every frequency's shielding effectiveness and its parts
+     */
+    public PlanarSweep sweep() {
+        return barrier.facing(field).sweep(band, points);
+    }
+
+    /**
+     * Reads a design file, resolving material identifiers against a catalogue.
+     *
+     * @param json      the document, not null
+     * @param catalogue the catalogue for material references, not null
+     * @return the design
+     * @throws MaterialFileException if the document is not an acceptable design (with its location)
+     */
+    public static Design parse(String json, Catalogue catalogue) {
+        Require.nonNull("catalogue", catalogue);
+        return Json.readDesign(Node.parse(Require.nonNull("json", json)), catalogue);
+    }
+
+    /**
+     * Reads a design file from a stream (UTF-8, UTF-16 or UTF-32, detected); the stream is
+     * not closed.
+     *
+     * @param in        the stream, not null
+     * @param catalogue the catalogue for material references, not null
+     * @return the design
+     * @throws MaterialFileException if the document is not an acceptable design
+     * @throws java.io.UncheckedIOException if reading fails
+     */
+    public static Design read(InputStream in, Catalogue catalogue) {
+        Require.nonNull("catalogue", catalogue);
+        return Json.readDesign(Node.parse(Require.nonNull("stream", in)), catalogue);
+    }
+
+    /**
+     * Reads a design file.
+     *
+     * @param file      the file, not null
+     * @param catalogue the catalogue for material references, not null
+     * @return the design
+     * @throws IOException           if the file cannot be read
+     * @throws MaterialFileException if the document is not an acceptable design
+     */
+    public static Design read(Path file, Catalogue catalogue) throws IOException {
+        try (InputStream in = Files.newInputStream(Require.nonNull("file", file))) {
+            return read(in, catalogue);
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    /**
+     * The design as a JSON document, read back by {@link #parse(String, Catalogue)} to an
+     * equal design (given a catalogue holding the same materials). The format:
+     *
+     * <pre>
+     * {
+     *   "format": "shield-design",
+     *   "version": 1,
+     *   "title": "lid for a fluxgate housing",            (optional)
+     *   "layers": [
+     *     { "material": "copper-annealed", "thickness": "0.3 mm" },
+     *     { "gap": "2 mm" },
+     *     { "material": "nickel-iron-80", "thickness": "0.5 mm", "temperature": "60 °C" },
+     *     { "medium": { "name": "my alloy", "conductivity": "1.6 MS/m",
+     *                   "permeability": { "model": "relaxation", "lowFrequency": 30000, "corner": "1 kHz" },
+     *                   "permittivity": 1 },
+     *       "thickness": "1 mm" }
+     *   ],
+     *   "field": { "kind": "magnetic-near-field", "distance": "6 cm", "impedance": "exact-dipole" },
+     *   "band": "10 Hz to 100 kHz",
+     *   "points": 41
+     * }
+     * </pre>
+     *
+     * Field kinds: {@code plane-wave} (no distance or impedance), {@code magnetic-near-field},
+     * {@code electric-near-field}; impedance forms {@code textbook}, {@code exact-dipole}. A
+     * finish known by sheet resistance may omit the thickness (its nominal one is used).
+     * Values are written in a short unit form where that reads back exactly, else in SI
+     * units with every digit.
+     *
+     * @return the document, pretty-printed
+     */
+    public String toJson() {
+        return Json.writeDesign(this);
+    }
+
+    /**
+     * Writes {@link #toJson()} to a file in UTF-8, replacing it.
+     *
+     * @param file the file, not null
+     * @throws IOException if the file cannot be written
+     */
+    public void write(Path file) throws IOException {
+        Files.writeString(Require.nonNull("file", file), toJson(), StandardCharsets.UTF_8);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Design d && d.title.equals(title) && d.layers.equals(layers) && d.field.equals(field)
+                && d.band.equals(band) && d.points == points;
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(title, layers, field, band, points);
+    }
+
+    @Override
+    public String toString() {
+        return (title.isEmpty() ? "design" : title) + ": " + layers + " facing " + field + ", " + band + ", " + points
+                + " points";
+    }
+}

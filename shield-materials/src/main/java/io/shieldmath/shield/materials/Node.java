@@ -1,0 +1,319 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.materials;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.Function;
+import tools.jackson.core.JacksonException;
+import tools.jackson.core.JsonParser;
+import tools.jackson.core.JsonToken;
+import tools.jackson.core.ObjectReadContext;
+import tools.jackson.core.StreamReadConstraints;
+import tools.jackson.core.StreamReadFeature;
+import tools.jackson.core.TokenStreamLocation;
+import tools.jackson.core.exc.JacksonIOException;
+import tools.jackson.core.json.JsonFactory;
+
+/**
+ * A JSON value with its path and its line and column in the document, read with
+ * Jackson's streaming parser so that every later validation error can say where it is.
+ * Plain data only: objects, arrays, strings, numbers (kept as their text), booleans and
+ * null; no type information is ever taken from the document.
+ *
+ * <p>Limits (Jackson {@link StreamReadConstraints} plus the checks here): document
+ * {@value #MAX_DOCUMENT_CHARS} characters, nesting depth {@value #MAX_DEPTH}, strings
+ * {@value #MAX_STRING} characters, numbers {@value #MAX_NUMBER} digits, field names
+ * {@value #MAX_NAME} characters. Duplicate field names are rejected.
+ *
+ * <p>Immutable once read.
+ */
+final class Node {
+
+    static final int MAX_DEPTH = 32;
+    static final long MAX_DOCUMENT_CHARS = 4_000_000;
+    static final int MAX_STRING = 100_000;
+    static final int MAX_NUMBER = 64;
+    static final int MAX_NAME = 200;
+
+    private static final JsonFactory FACTORY = JsonFactory.builder()
+            .streamReadConstraints(StreamReadConstraints.builder()
+                    .maxNestingDepth(MAX_DEPTH)
+                    .maxDocumentLength(MAX_DOCUMENT_CHARS)
+                    .maxStringLength(MAX_STRING)
+                    .maxNumberLength(MAX_NUMBER)
+                    .maxNameLength(MAX_NAME)
+                    .maxTokenCount(1_000_000)
+                    .build())
+            .disable(StreamReadFeature.AUTO_CLOSE_SOURCE)
+            .build();
+
+    enum Type {
+        OBJECT("an object"), ARRAY("an array"), STRING("a text value"), NUMBER("a number"),
+        BOOLEAN("true or false"), NULL("null");
+
+        final String words;
+
+        Type(String words) {
+            this.words = words;
+        }
+    }
+
+    final Type type;
+    final String path;
+    final int line;
+    final int column;
+    /** String value or number text. */
+    final String text;
+    final Map<String, Node> fields;
+    final List<Node> items;
+
+    private Node(Type type, String path, int line, int column, String text, Map<String, Node> fields,
+                 List<Node> items) {
+        this.type = type;
+        this.path = path;
+        this.line = line;
+        this.column = column;
+        this.text = text;
+        this.fields = fields;
+        this.items = items;
+    }
+
+    // ---------------------------------------------------------------- reading
+
+    static Node parse(String json) {
+        return read(() -> FACTORY.createParser(ObjectReadContext.empty(), json));
+    }
+
+    static Node parse(Reader reader) {
+        return read(() -> FACTORY.createParser(ObjectReadContext.empty(), reader));
+    }
+
+    static Node parse(InputStream in) {
+        return read(() -> FACTORY.createParser(ObjectReadContext.empty(), in));
+    }
+
+    private interface ParserSource {
+        JsonParser open();
+    }
+
+    private static Node read(ParserSource source) {
+        State s = new State();
+        try (JsonParser p = source.open()) {
+            s.parser = p;
+            JsonToken t = s.next();
+            if (t == null) {
+                throw new MaterialFileException("$", 1, 1, "the document is empty", null);
+            }
+            Node root = s.value(t, "$", 1);
+            if (s.next() != null) {
+                throw s.error("content after the end of the document");
+            }
+            return root;
+        } catch (JacksonIOException e) {
+            IOException io = e.getCause() != null ? e.getCause() : new IOException(e.getOriginalMessage(), e);
+            throw new UncheckedIOException(io);
+        } catch (JacksonException e) {
+            TokenStreamLocation loc = e.getLocation();
+            if ((loc == null || loc.getLineNr() < 1) && s.parser != null) {
+                loc = s.parser.currentLocation();
+            }
+            int line = loc == null || loc.getLineNr() < 1 ? 1 : loc.getLineNr();
+            int column = loc == null || loc.getColumnNr() < 1 ? 1 : loc.getColumnNr();
+            throw new MaterialFileException(s.path, line, column, "not valid JSON: " + firstLine(e.getOriginalMessage()), e);
+        }
+    }
+
+    private static String firstLine(String m) {
+        if (m == null) {
+            return "unreadable";
+        }
+        int i = m.indexOf('\n');
+        return i < 0 ? m : m.substring(0, i);
+    }
+
+    /** Parse state: the parser and the path of the value being read, for error messages. */
+    private static final class State {
+        JsonParser parser;
+        String path = "$";
+
+        JsonToken next() {
+            return parser.nextToken();
+        }
+
+        MaterialFileException error(String problem) {
+            TokenStreamLocation l = parser.currentTokenLocation();
+            return new MaterialFileException(path, Math.max(1, l.getLineNr()), Math.max(1, l.getColumnNr()), problem,
+                    null);
+        }
+
+        Node value(JsonToken t, String at, int depth) {
+            path = at;
+            if (depth > MAX_DEPTH) {
+                throw error("nested more than " + MAX_DEPTH + " levels deep");
+            }
+            TokenStreamLocation l = parser.currentTokenLocation();
+            int line = Math.max(1, l.getLineNr());
+            int col = Math.max(1, l.getColumnNr());
+            switch (t) {
+                case START_OBJECT: {
+                    Map<String, Node> map = new LinkedHashMap<>();
+                    for (JsonToken k = next(); k != JsonToken.END_OBJECT; k = next()) {
+                        String name = parser.currentName();
+                        String child = at + "." + name;
+                        path = child;
+                        if (map.containsKey(name)) {
+                            throw error("duplicate field \"" + name + "\"");
+                        }
+                        map.put(name, value(next(), child, depth + 1));
+                        path = at;
+                    }
+                    return new Node(Type.OBJECT, at, line, col, null, Collections.unmodifiableMap(map), null);
+                }
+                case START_ARRAY: {
+                    List<Node> list = new ArrayList<>();
+                    for (JsonToken v = next(); v != JsonToken.END_ARRAY; v = next()) {
+                        list.add(value(v, at + "[" + list.size() + "]", depth + 1));
+                        path = at;
+                    }
+                    return new Node(Type.ARRAY, at, line, col, null, null, Collections.unmodifiableList(list));
+                }
+                case VALUE_STRING:
+                    return new Node(Type.STRING, at, line, col, parser.getString(), null, null);
+                case VALUE_NUMBER_INT:
+                case VALUE_NUMBER_FLOAT:
+                    return new Node(Type.NUMBER, at, line, col, parser.getString(), null, null);
+                case VALUE_TRUE:
+                case VALUE_FALSE:
+                    return new Node(Type.BOOLEAN, at, line, col, Boolean.toString(t == JsonToken.VALUE_TRUE), null,
+                            null);
+                case VALUE_NULL:
+                    return new Node(Type.NULL, at, line, col, null, null, null);
+                default:
+                    throw error("unexpected " + t);
+            }
+        }
+    }
+
+    // ---------------------------------------------------------------- validation helpers
+
+    MaterialFileException error(String problem) {
+        return new MaterialFileException(path, line, column, problem, null);
+    }
+
+    MaterialFileException error(String problem, Throwable cause) {
+        return new MaterialFileException(path, line, column, problem, cause);
+    }
+
+    private Node expect(Type t) {
+        if (type != t) {
+            throw error("expected " + t.words + ", found " + type.words);
+        }
+        return this;
+    }
+
+    /**
+     * This object's fields, checking that every field name is one of {@code allowed}.
+     */
+    Fields object(Set<String> allowed) {
+        expect(Type.OBJECT);
+        for (Map.Entry<String, Node> e : fields.entrySet()) {
+            if (!allowed.contains(e.getKey())) {
+                throw e.getValue().error("unknown field \"" + e.getKey() + "\"; allowed here: "
+                        + String.join(", ", allowed));
+            }
+        }
+        return new Fields(this);
+    }
+
+    List<Node> array(int min, int max) {
+        expect(Type.ARRAY);
+        if (items.size() < min || items.size() > max) {
+            throw error("expected " + min + " to " + max + " entries, found " + items.size());
+        }
+        return items;
+    }
+
+    String string() {
+        return expect(Type.STRING).text;
+    }
+
+    /** A text value read by a quantity parser; its exceptions become located ones. */
+    <Q> Q quantity(Function<String, Q> parser, String example) {
+        if (type != Type.STRING) {
+            throw error("expected a text value with a unit, such as \"" + example + "\", found " + type.words);
+        }
+        return convert(parser, text);
+    }
+
+    <Q> Q convert(Function<String, Q> parser, String value) {
+        try {
+            return parser.apply(value);
+        } catch (IllegalArgumentException | ArithmeticException e) {
+            throw error(e.getMessage(), e);
+        }
+    }
+
+    /** A plain number, or a text value holding one. */
+    double number() {
+        if (type != Type.NUMBER && type != Type.STRING) {
+            throw error("expected a number, found " + type.words);
+        }
+        double v;
+        try {
+            v = Double.parseDouble(text.strip());
+        } catch (NumberFormatException e) {
+            throw error("not a number: \"" + text + "\"");
+        }
+        if (!Double.isFinite(v) || text.strip().matches(".*[^0-9eE.+\\-].*")) {
+            throw error("not a finite decimal number: \"" + text + "\"");
+        }
+        return v;
+    }
+
+    int integer(int min, int max) {
+        expect(Type.NUMBER);
+        if (!text.matches("-?[0-9]{1,10}")) {
+            throw error("expected a whole number from " + min + " to " + max + ", found " + text);
+        }
+        long v = Long.parseLong(text);
+        if (v < min || v > max) {
+            throw error("expected a whole number from " + min + " to " + max + ", found " + text);
+        }
+        return (int) v;
+    }
+
+    /** The fields of one JSON object, already checked against the allowed names. */
+    static final class Fields {
+        final Node node;
+
+        Fields(Node node) {
+            this.node = node;
+        }
+
+        Node required(String name) {
+            Node n = node.fields.get(name);
+            if (n == null) {
+                throw node.error("missing field \"" + name + "\"");
+            }
+            return n;
+        }
+
+        Node optional(String name) {
+            return node.fields.get(name);
+        }
+
+        boolean has(String name) {
+            return node.fields.containsKey(name);
+        }
+    }
+}
