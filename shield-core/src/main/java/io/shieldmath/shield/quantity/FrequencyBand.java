@@ -48,7 +48,8 @@ public final class FrequencyBand {
     }
 
     /**
-     * Reads {@code "10 Hz to 100 kHz"} (also {@code "10 Hz - 100 kHz"} or {@code "10 Hz..100 kHz"}).
+     * Reads {@code "10 Hz to 100 kHz"} (also {@code "10 Hz - 100 kHz"} or {@code "10 Hz..100 kHz"}),
+     * or a single frequency such as {@code "50 Hz"} for a band of one frequency.
      *
      * @param text the text, not null
      * @return the band
@@ -58,8 +59,7 @@ public final class FrequencyBand {
         String s = Require.nonNull("band text", text).toString();
         String[] parts = s.split("\\s+to\\s+|\\.\\.|\\s+-\\s+", 2);
         if (parts.length != 2) {
-            throw InvalidQuantityException.unreadable("frequency band", s, "no separator",
-                    "two frequencies such as \"10 Hz to 100 kHz\"");
+            return at(Frequency.parse(s));
         }
         return of(Frequency.parse(parts[0]), Frequency.parse(parts[1]));
     }
@@ -131,8 +131,13 @@ public final class FrequencyBand {
         return low.hashCode() * 31 + high.hashCode();
     }
 
+    /**
+     * The text form, {@code "10 Hz to 100 kHz"}, or {@code "50 Hz"} for a single frequency.
+     *
+     * @return the text form, read back by {@link #parse(CharSequence)}
+     */
     @Override
     public String toString() {
-        return low + " to " + high;
+        return low.equals(high) ? low.toString() : low + " to " + high;
     }
 }

@@ -3,83 +3,308 @@
  */
 package io.shieldmath.shield.examples;
 
+import static io.shieldmath.shield.quantity.Quantities.Hz;
 import static io.shieldmath.shield.quantity.Quantities.cm;
+import static io.shieldmath.shield.quantity.Quantities.kHz;
 import static io.shieldmath.shield.quantity.Quantities.mm;
+import static io.shieldmath.shield.quantity.Quantities.nT;
+import static io.shieldmath.shield.quantity.Quantities.uT;
 
+import io.shieldmath.shield.design.MarginReport;
+import io.shieldmath.shield.design.Requirement;
+import io.shieldmath.shield.design.ShieldingModel;
+import io.shieldmath.shield.enclosure.Enclosure;
+import io.shieldmath.shield.enclosure.EnclosureEvaluation;
+import io.shieldmath.shield.enclosure.Opening;
+import io.shieldmath.shield.enclosure.Shell;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Design;
+import io.shieldmath.shield.materials.DesignLayer;
 import io.shieldmath.shield.materials.Material;
-import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.FrequencyBand;
+import io.shieldmath.shield.quantity.Length;
+import java.io.IOException;
 import java.io.PrintStream;
-import java.util.LinkedHashMap;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 
 /**
- * The main example: a few candidate plates in front of a magnetic source, evaluated over
- * frequency and printed as a table. The materials come from the built-in catalogue (typical
- * handbook values with their sources, see {@link Catalogue}); the scenario is invented for
- * the demo.
+ * The main example, a worked design study on an invented scenario (every number here is
+ * illustrative, made up for this example):
+ *
+ * <p>A fluxgate magnetometer board inside a laboratory instrument sits 6 cm from the 20 kHz
+ * coil of an inductive charger and 30 cm from a 50 Hz mains transformer. Which shield,
+ * lightest first, keeps the interference at the sensor below its noise floor?
+ *
+ * <p>The program states the scenario, computes the required SE per band, evaluates flat
+ * plates, a two-layer stack and vented cans, ranks them by mass against the requirement,
+ * prints a report and writes into an output folder a CSV of the sweeps, the chosen
+ * design as a JSON design file, and plots (PNG and SVG).
  */
 public final class DesignStudy {
+
+    /** Where the plate candidates sit: their area, for the mass (illustrative). */
+    static final double PLATE_AREA_M2 = 0.12 * 0.12;
+    /** The can's inner sides (illustrative). */
+    static final double[] CAN_SIDES_M = {0.08, 0.06, 0.03};
+    /** Below this frequency the transformer's field dominates, above it the charger's. */
+    static final double SOURCE_SPLIT_HZ = 1000;
 
     private DesignStudy() {
     }
 
     /**
-     * Runs the study and prints the report to standard output.
+     * Runs the study, printing the report to standard output.
      *
-     * @param args ignored
+     * @param args optional: the output folder (default {@code shield-output})
+     * @throws IOException if an output file cannot be written
      */
-    public static void main(String[] args) {
-        run(System.out);
+    public static void main(String[] args) throws IOException {
+        Path out = Paths.get(args.length > 0 ? args[0] : "shield-output");
+        run(System.out, out);
+    }
+
+    /** One evaluated candidate. */
+    record Evaluated(String name, String kind, double massGrams, MarginReport margin, String limitingPath,
+                     List<DesignLayer> wall, double[] sweepDb) {
+    }
+
+    /** What the study found, for callers and tests. */
+    public record Outcome(String recommended, Path designFile, Requirement requirement, Path outputFolder) {
     }
 
     /**
      * Runs the study.
      *
-     * @param out where the report goes
+     * @param out    where the report goes
+     * @param folder the output folder, created if missing
+     * @return what the study recommends and where it wrote it
+     * @throws IOException if an output file cannot be written
      */
-    public static void run(PrintStream out) {
+    public static Outcome run(PrintStream out, Path folder) throws IOException {
+        Files.createDirectories(folder);
         Catalogue catalogue = Catalogue.builtIn();
         Material copper = catalogue.get("copper-annealed");
-        Material aluminium = catalogue.get("aluminium-1100-o");
+        Material aluminium = catalogue.get("aluminium-6061-t6");
         Material stainless = catalogue.get("stainless-304");
         Material nickelIron = catalogue.get("nickel-iron-80");
 
-        Map<String, Barrier> candidates = new LinkedHashMap<>();
-        candidates.put("copper 0.5 mm", Barrier.of(copper, mm(0.5)));
-        candidates.put("aluminium 1 mm", Barrier.of(aluminium, mm(1)));
-        candidates.put("stainless 1 mm", Barrier.of(stainless, mm(1)));
-        candidates.put("Ni-Fe 0.5 mm", Barrier.of(nickelIron, mm(0.5)));
-        candidates.put("Cu 0.3 + gap 2 + NiFe 0.5", Barrier.of(copper, mm(0.3)).thenGap(mm(2)).then(nickelIron, mm(0.5)));
+        IncidentField transformer = IncidentField.magneticNearField(cm(30), ImpedanceForm.EXACT_DIPOLE);
+        IncidentField charger = IncidentField.magneticNearField(cm(6), ImpedanceForm.EXACT_DIPOLE);
+        Requirement need = Requirement.none()
+                .plus(FrequencyBand.at(Hz(50)), uT(2), nT(5))
+                .plus(FrequencyBand.at(Hz(150)), uT(0.5), nT(5))
+                .plus(FrequencyBand.of(kHz(19), kHz(21)), uT(8), nT(5))
+                .plus(FrequencyBand.of(kHz(38), kHz(42)), uT(1.5), nT(5))
+                .plus(FrequencyBand.of(kHz(57), kHz(63)), uT(0.6), nT(5));
 
-        IncidentField field = IncidentField.magneticNearField(cm(6), ImpedanceForm.EXACT_DIPOLE);
-        double[] hz = {50, 1e3, 1e4, 2e4, 1e5, 1e6};
+        printScenario(out, need);
+        double[] sweepHz = FrequencyBand.of(Hz(10), kHz(200)).logSpacedHertz(121);
 
-        out.println("shield: candidate plates 6 cm from a magnetic (loop) source, exact dipole wave impedance");
-        out.println("Invented scenario; materials from the built-in catalogue (typical values, see its sources).");
-        out.println();
-        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%-28s", "barrier  \\  SE (dB) at"));
-        for (double f : hz) {
-            head.append(String.format(Locale.ROOT, "%10s", Frequency.ofHertz(f)));
+        List<Evaluated> results = new ArrayList<>();
+        // Flat plates and a stack between the sources and the board (infinite-sheet estimates).
+        results.add(plate("plate", "aluminium 6061, 2 mm", List.of(DesignLayer.of(aluminium, mm(2))),
+                transformer, charger, need, sweepHz));
+        results.add(plate("plate", "copper, 1 mm", List.of(DesignLayer.of(copper, mm(1))),
+                transformer, charger, need, sweepHz));
+        results.add(plate("plate", "stainless 304, 1 mm", List.of(DesignLayer.of(stainless, mm(1))),
+                transformer, charger, need, sweepHz));
+        results.add(plate("plate", "80 % nickel-iron, 1 mm", List.of(DesignLayer.of(nickelIron, mm(1))),
+                transformer, charger, need, sweepHz));
+        results.add(plate("stack", "Cu 0.5 mm | gap 1 mm | Ni-Fe 0.5 mm", List.of(DesignLayer.of(copper, mm(0.5)),
+                DesignLayer.gap(mm(1)), DesignLayer.of(nickelIron, mm(0.5))), transformer, charger, need, sweepHz));
+        // Closed cans around the board, vented, in the (locally uniform) ambient field.
+        Opening vent = Opening.holes(mm(3), 24).named("vent, 24 holes of 3 mm");
+        results.add(can("can", "Ni-Fe 1 mm, vented", Shell.box(len(0), len(1), len(2)).wall(nickelIron, mm(1)),
+                List.of(DesignLayer.of(nickelIron, mm(1))), vent, need, sweepHz));
+        results.add(can("can", "Ni-Fe 0.5 mm in Cu 0.5 mm, vented", Shell.box(len(0), len(1), len(2))
+                        .wall(nickelIron, mm(0.5)).thenGap(mm(2)).then(copper, mm(0.5)),
+                List.of(DesignLayer.of(copper, mm(0.5)), DesignLayer.gap(mm(2)), DesignLayer.of(nickelIron, mm(0.5))),
+                vent, need, sweepHz));
+        results.add(can("can", "aluminium 2 mm, vented", Shell.box(len(0), len(1), len(2)).wall(aluminium, mm(2)),
+                List.of(DesignLayer.of(aluminium, mm(2))), vent, need, sweepHz));
+
+        Evaluated best = printRanking(out, results);
+        printCautions(out);
+
+        writeCsv(folder.resolve("sweeps.csv"), sweepHz, results);
+        Path design = folder.resolve("chosen-design.json");
+        if (best != null) {
+            Design d = Design.of(best.wall(), charger, FrequencyBand.of(Hz(10), kHz(200)), 61)
+                    .withTitle(best.kind() + ": " + best.name() + " (wall stack, source side first)");
+            d.write(design);
         }
-        out.println(head);
-        double[] se = new double[hz.length];
-        for (Map.Entry<String, Barrier> e : candidates.entrySet()) {
-            PlanarEvaluation eval = e.getValue().facing(field);
-            eval.shieldingEffectivenessDb(hz, se);
-            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-28s", e.getKey()));
-            for (double v : se) {
-                row.append(String.format(Locale.ROOT, "%10.1f", v));
+        List<SeChart.Curve> curves = new ArrayList<>();
+        for (Evaluated e : results) {
+            curves.add(new SeChart.Curve(e.kind() + ": " + e.name(), sweepHz, e.sweepDb()));
+        }
+        SeChart.write(folder.resolve("se-vs-frequency.png"), folder.resolve("se-vs-frequency.svg"),
+                "Candidate shields for the magnetometer board (illustrative)", curves, requirementSegments(need));
+        out.println();
+        out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, chosen-design.json, "
+                + "se-vs-frequency.png, se-vs-frequency.svg");
+        return new Outcome(best == null ? null : best.kind() + ": " + best.name(), best == null ? null : design,
+                need, folder);
+    }
+
+    private static Length len(int i) {
+        return Length.ofMetres(CAN_SIDES_M[i]);
+    }
+
+    /** The planar model with the field of whichever source dominates at each frequency. */
+    static ShieldingModel twoSources(PlanarEvaluation nearTransformer, PlanarEvaluation nearCharger) {
+        return hz -> (hz < SOURCE_SPLIT_HZ ? nearTransformer : nearCharger).shieldingEffectivenessDb(hz);
+    }
+
+    private static Evaluated plate(String kind, String name, List<DesignLayer> layers, IncidentField transformer,
+                                   IncidentField charger, Requirement need, double[] sweepHz) {
+        var barrier = io.shieldmath.shield.planar.Barrier.of(layers.stream().map(DesignLayer::toLayer).toList());
+        ShieldingModel model = twoSources(barrier.facing(transformer), barrier.facing(charger));
+        double mass = 0;
+        for (DesignLayer l : layers) {
+            if (l.material().isPresent()) {
+                mass += l.material().get().arealMass(l.thickness()) * PLATE_AREA_M2 * 1000;
             }
-            out.println(row);
+        }
+        return new Evaluated(name, kind, mass, need.marginOf(model), "the plate (edges ignored)", layers,
+                sweep(model, sweepHz));
+    }
+
+    private static Evaluated can(String kind, String name, Shell shell, List<DesignLayer> wallSourceSideFirst,
+                                 Opening vent, Requirement need, double[] sweepHz) {
+        EnclosureEvaluation e = Enclosure.of(shell).withOpening(vent).inUniformField();
+        ShieldingModel model = hz -> e.at(Frequency.ofHertz(hz)).totalDb();
+        MarginReport margin = need.marginOf(model);
+        String limiting = e.at(margin.worst().frequency()).limitingPath().name();
+        double area = 2 * (CAN_SIDES_M[0] * CAN_SIDES_M[1] + CAN_SIDES_M[1] * CAN_SIDES_M[2]
+                + CAN_SIDES_M[0] * CAN_SIDES_M[2]);
+        double mass = 0;
+        for (DesignLayer l : wallSourceSideFirst) {
+            if (l.material().isPresent()) {
+                mass += l.material().get().arealMass(l.thickness()) * area * 1000;
+            }
+        }
+        return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(model, sweepHz));
+    }
+
+    private static double[] sweep(ShieldingModel m, double[] hz) {
+        double[] v = new double[hz.length];
+        for (int i = 0; i < hz.length; i++) {
+            v[i] = m.shieldingEffectivenessDb(hz[i]);
+        }
+        return v;
+    }
+
+    private static void printScenario(PrintStream out, Requirement need) {
+        out.println("shield design study: a magnetometer board between a charger coil and a transformer");
+        out.println("=================================================================================");
+        out.println("Scenario (illustrative, invented for this example): a fluxgate magnetometer board in a");
+        out.println("lab instrument sits 6 cm from the 20 kHz coil of an inductive charger and 30 cm from a");
+        out.println("50 Hz mains transformer. The sensor's noise floor is 5 nT; interference must stay below.");
+        out.println("Assumptions: magnetic near fields with the exact dipole wave impedance; plates are");
+        out.println(String.format(Locale.ROOT, "infinite sheets of %.0f cm x %.0f cm for their mass; cans are "
+                + "closed boxes of %.0f x %.0f x %.0f cm", Math.sqrt(PLATE_AREA_M2) * 100,
+                Math.sqrt(PLATE_AREA_M2) * 100, CAN_SIDES_M[0] * 100, CAN_SIDES_M[1] * 100, CAN_SIDES_M[2] * 100));
+        out.println("in the locally uniform ambient field, each with a vent; materials from the built-in");
+        out.println("catalogue at 20 °C.");
+        out.println();
+        out.println("Required shielding per band");
+        out.println(String.format(Locale.ROOT, "  %-22s %12s %12s %10s", "band", "incident", "tolerated",
+                "required"));
+        for (Requirement.Entry e : need.entries()) {
+            out.println(String.format(Locale.ROOT, "  %-22s %12s %12s %7.1f dB", e.band(), e.incident(),
+                    e.tolerated(), e.requiredDb()));
         }
         out.println();
-        out.println("Estimates for infinite flat sheets; real shields are limited by seams, openings and edges.");
-        out.println("Verify by measurement, and follow local codes for mains, medical and safety work.");
+    }
+
+    private static Evaluated printRanking(PrintStream out, List<Evaluated> results) {
+        List<Evaluated> sorted = new ArrayList<>(results);
+        sorted.sort(Comparator.comparing((Evaluated e) -> !e.margin().meets()).thenComparingDouble(Evaluated::massGrams));
+        out.println("Candidates, meeting designs first, lightest first within each group");
+        out.println(String.format(Locale.ROOT, "  %-5s %-36s %9s %10s %12s  %-6s %s", "kind", "design", "mass",
+                "margin", "worst at", "meets", "limited by"));
+        Evaluated best = null;
+        Evaluated bestPlate = null;
+        for (Evaluated e : sorted) {
+            MarginReport.Line w = e.margin().worst();
+            out.println(String.format(Locale.ROOT, "  %-5s %-36s %7.0f g %7.1f dB %12s  %-6s %s", e.kind(), e.name(),
+                    e.massGrams(), w.marginDb(), w.frequency(), e.margin().meets() ? "yes" : "no", e.limitingPath()));
+            if (e.margin().meets() && e.kind().equals("can") && best == null) {
+                best = e;
+            }
+            if (e.margin().meets() && !e.kind().equals("can") && bestPlate == null) {
+                bestPlate = e;
+            }
+        }
+        out.println();
+        if (best == null && bestPlate != null) {
+            out.println("No closed can meets the requirement; only an infinite-sheet estimate does, which real");
+            out.println("plates will not reach. Taking it anyway, as the best available lead:");
+            best = bestPlate;
+        }
+        if (best == null) {
+            out.println("No candidate meets the requirement: add thickness, a second layer or a closed can.");
+        } else {
+            out.println(String.format(Locale.ROOT, "Recommended: %s: %s, %.0f g, worst margin %.1f dB at %s.",
+                    best.kind(), best.name(), best.massGrams(), best.margin().worstMarginDb(),
+                    best.margin().worst().frequency()));
+        }
+        out.println("The recommendation is the lightest closed can that meets every band. Plate and stack");
+        out.println("numbers are infinite-sheet estimates shown for comparison: field leaking around the edges");
+        out.println("of a real plate limits it (often to 10-20 dB), so they are not recommended on their own.");
+        return best;
+    }
+
+    private static void printCautions(PrintStream out) {
+        out.println();
+        out.println("Cautions");
+        out.println("  These are estimates for idealised geometry. Real shields are limited by seams, openings,");
+        out.println("  fasteners and edges; verify by measurement (IEEE Std 299 for enclosures, ASTM D4935 for");
+        out.println("  planar materials). High-permeability alloys lose permeability when bent or drilled after");
+        out.println("  annealing and saturate in strong fields. Mains transformers and chargers carry hazardous");
+        out.println("  voltages; strong fields have exposure limits (ICNIRP, IEEE C95.1). Medical, safety and");
+        out.println("  compliance work must follow local codes and licensed, qualified practice.");
+    }
+
+    private static void writeCsv(Path file, double[] hz, List<Evaluated> results) throws IOException {
+        StringBuilder s = new StringBuilder("frequency_hz");
+        for (Evaluated e : results) {
+            s.append(",\"").append(e.kind()).append(": ").append(e.name()).append(" (SE dB)\"");
+        }
+        s.append('\n');
+        for (int i = 0; i < hz.length; i++) {
+            s.append(String.format(Locale.ROOT, "%.6g", hz[i]));
+            for (Evaluated e : results) {
+                s.append(String.format(Locale.ROOT, ",%.4f", e.sweepDb()[i]));
+            }
+            s.append('\n');
+        }
+        Files.writeString(file, s, StandardCharsets.UTF_8);
+    }
+
+    private static List<SeChart.Curve> requirementSegments(Requirement need) {
+        List<SeChart.Curve> segments = new ArrayList<>();
+        for (Requirement.Entry e : need.entries()) {
+            double lo = e.band().low().toHertz();
+            double hi = e.band().high().toHertz();
+            if (lo == hi) {
+                lo /= 1.08;
+                hi *= 1.08;
+            }
+            segments.add(new SeChart.Curve("required, " + e.band(), new double[] {lo, hi},
+                    new double[] {e.requiredDb(), e.requiredDb()}));
+        }
+        return segments;
     }
 }

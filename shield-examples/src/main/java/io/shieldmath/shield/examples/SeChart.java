@@ -15,7 +15,6 @@ import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
-import org.jfree.chart.renderer.xy.XYStepRenderer;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.svg.SVGGraphics2D;
@@ -23,7 +22,7 @@ import org.jfree.svg.SVGUtils;
 
 /**
  * Plots of shielding effectiveness against frequency (log axis) for several designs,
- * with the requirement drawn as a dashed step line, written headless as PNG and SVG with
+ * with the requirement drawn as dashed black segments, written headless as PNG and SVG with
  * JFreeChart and JFreeSVG.
  */
 public final class SeChart {
@@ -42,10 +41,10 @@ public final class SeChart {
      * @param svg         the SVG file to write
      * @param title       the chart title
      * @param curves      the designs' curves
-     * @param requirement the requirement as a curve (step line), or null for none
+     * @param requirement the requirement as segments (each a curve of two points), drawn as dashed black lines
      * @throws IOException if a file cannot be written
      */
-    public static void write(Path png, Path svg, String title, List<Curve> curves, Curve requirement)
+    public static void write(Path png, Path svg, String title, List<Curve> curves, List<Curve> requirement)
             throws IOException {
         System.setProperty("java.awt.headless", "true");
         XYSeriesCollection designs = new XYSeriesCollection();
@@ -64,15 +63,17 @@ public final class SeChart {
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(Color.LIGHT_GRAY);
         plot.setRangeGridlinePaint(Color.LIGHT_GRAY);
-        if (requirement != null) {
-            XYSeriesCollection need = new XYSeriesCollection(series(requirement));
-            XYStepRenderer step = new XYStepRenderer();
-            step.setSeriesPaint(0, Color.BLACK);
-            step.setSeriesStroke(0, new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
-                    new float[] {8f, 5f}, 0f));
-            plot.setDataset(1, need);
-            plot.setRenderer(1, step);
+        XYSeriesCollection need = new XYSeriesCollection();
+        XYLineAndShapeRenderer dashed = new XYLineAndShapeRenderer(true, false);
+        for (int i = 0; i < requirement.size(); i++) {
+            need.addSeries(series(requirement.get(i)));
+            dashed.setSeriesPaint(i, Color.BLACK);
+            dashed.setSeriesStroke(i, new BasicStroke(3f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                    new float[] {6f, 4f}, 0f));
+            dashed.setSeriesVisibleInLegend(i, i == 0);
         }
+        plot.setDataset(1, need);
+        plot.setRenderer(1, dashed);
         JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
         chart.setBackgroundPaint(Color.WHITE);
         int w = 1000;
