@@ -13,4 +13,5 @@ module io.shieldmath.shield.core {
     exports io.shieldmath.shield.medium;
     exports io.shieldmath.shield.field;
     exports io.shieldmath.shield.planar;
+    exports io.shieldmath.shield.coupling;
 }
