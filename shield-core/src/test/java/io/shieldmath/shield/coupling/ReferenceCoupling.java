@@ -68,28 +68,39 @@ final class ReferenceCoupling {
                           double relative) {
         double pre = PhysicalConstants.MU_0 * Math.PI * a * b * n1 * n2;
         UnivariateFunction kernel = l -> BesselJ.value(1, l * a) * BesselJ.value(1, l * b) * Math.exp(-l * z);
+        double abs = relative * 1e-2 * Elliptic.maxwell(a, b, z) / (PhysicalConstants.MU_0 * Math.PI * a * b);
+        if (barrier == null) {
+            return new Complex(pre * axis(kernel, a, b, z, relative, abs), 0);
+        }
+        double re = axis(l -> kernel.value(l) * transmission(barrier, l, hz).getReal(), a, b, z, relative, abs);
+        double im = axis(l -> kernel.value(l) * transmission(barrier, l, hz).getImaginary(), a, b, z, relative, abs);
+        return new Complex(pre * re, pre * im);
+    }
+
+    /** ∫0^∞ J1(λa)·J1(λb)·e^{−λz}·λ^{−n} dλ. */
+    static double moment(double a, double b, double z, int n) {
+        UnivariateFunction f = l -> BesselJ.value(1, l * a) * BesselJ.value(1, l * b) * Math.exp(-l * z)
+                * Math.pow(l, -n);
+        double abs = 1e-16 * Elliptic.maxwell(a, b, z) / (PhysicalConstants.MU_0 * Math.PI * a * b)
+                * Math.pow(Math.max(a, z), n);
+        return axis(f, a, b, z, 1e-13, abs);
+    }
+
+    /** The λ axis cut into intervals: geometric up to the geometry's scale, then quarter periods. */
+    private static double axis(UnivariateFunction f, double a, double b, double z, double relative, double abs) {
         double rho = Math.max(a, b);
         double scale = 1 / Math.max(rho, z);
         double top = 46 / z;
-        double abs = relative * 1e-2 * Elliptic.maxwell(a, b, z) / (PhysicalConstants.MU_0 * Math.PI * a * b);
-        double re = 0;
-        double im = 0;
-        // Breakpoints: geometric up to the scale, then steps of a quarter oscillation period.
+        double sum = 0;
         double lo = 0;
         double hi = scale * 1e-8;
         while (lo < top) {
-            final double x0 = lo;
-            final double x1 = Math.min(hi, top);
-            if (barrier == null) {
-                re += integrate(kernel, x0, x1, relative, abs);
-            } else {
-                re += integrate(l -> kernel.value(l) * transmission(barrier, l, hz).getReal(), x0, x1, relative, abs);
-                im += integrate(l -> kernel.value(l) * transmission(barrier, l, hz).getImaginary(), x0, x1, relative, abs);
-            }
+            double x1 = Math.min(hi, top);
+            sum += integrate(f, lo, x1, relative, abs);
             lo = x1;
             hi = x1 < scale ? x1 * 2 : x1 + Math.min(Math.PI / (2 * rho), 2 / z);
         }
-        return new Complex(pre * re, pre * im);
+        return sum;
     }
 
     private static double integrate(UnivariateFunction f, double lo, double hi, double relative, double abs) {
