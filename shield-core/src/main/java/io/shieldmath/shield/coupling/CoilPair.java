@@ -166,14 +166,14 @@ public final class CoilPair {
      * total air path changes, and it stays the same), so air gaps in the barrier are allowed
      * but not needed to place it.
      *
-     * @param barrier the barrier, not null, no thicker than {@link #gap()}
+     * @param barrier the barrier, not null, no thicker than {@link #gap()} (to rounding, 1e-12 relative)
      * @return the evaluation, ready for frequencies
      * @throws IllegalArgumentException if the barrier does not fit between the coils
      */
     public CouplingEvaluation through(Barrier barrier) {
         Require.nonNull("barrier", barrier);
         double t = barrier.totalThickness().toMetres();
-        if (t > gap) {
+        if (t > gap * (1 + 1e-12)) {
             throw new IllegalArgumentException("the barrier is " + t + " m thick but the gap between the coils is only "
                     + gap + " m");
         }
