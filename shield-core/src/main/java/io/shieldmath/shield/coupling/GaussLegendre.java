@@ -19,31 +19,16 @@ final class GaussLegendre {
         w = new double[n];
         for (int i = 0; i < (n + 1) / 2; i++) {
             double z = Math.cos(Math.PI * (i + 0.75) / (n + 0.5));
-            double dp = 0;
             for (int iter = 0; iter < 100; iter++) {
-                double p0 = 1;
-                double p1 = z;
-                for (int k = 2; k <= n; k++) {
-                    double p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
-                    p0 = p1;
-                    p1 = p2;
-                }
-                dp = n * (z * p1 - p0) / (z * z - 1);
-                double dz = p1 / dp;
+                double[] pd = legendre(n, z);
+                double dz = pd[0] / pd[1];
                 z -= dz;
                 if (Math.abs(dz) < 1e-16) {
                     break;
                 }
             }
-            // Recompute the derivative at the converged node for the weight.
-            double p0 = 1;
-            double p1 = z;
-            for (int k = 2; k <= n; k++) {
-                double p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
-                p0 = p1;
-                p1 = p2;
-            }
-            dp = n * (z * p1 - p0) / (z * z - 1);
+            // The derivative at the converged node gives the weight.
+            double dp = legendre(n, z)[1];
             double weight = 2 / ((1 - z * z) * dp * dp);
             x[i] = -z;
             x[n - 1 - i] = z;
@@ -53,5 +38,17 @@ final class GaussLegendre {
         if (n % 2 == 1) {
             x[n / 2] = 0;
         }
+    }
+
+    /** P_n(z) and P_n'(z) by the three-term recurrence (A&S 22.7.10, 22.8.5). */
+    private static double[] legendre(int n, double z) {
+        double p0 = 1;
+        double p1 = z;
+        for (int k = 2; k <= n; k++) {
+            double p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
+            p0 = p1;
+            p1 = p2;
+        }
+        return new double[] {p1, n * (z * p1 - p0) / (z * z - 1)};
     }
 }
