@@ -146,7 +146,7 @@ public final class CouplingEvaluation {
      */
     public double insertionLossDb(double hertz) {
         double hz = checkHertz("frequency", hertz);
-        double[] out = new double[3];
+        double[] out = new double[4];
         SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, new double[SpectralChain.SLOTS * mu.length], out);
         return lossDb(out, hz);
     }
@@ -170,7 +170,7 @@ public final class CouplingEvaluation {
                     + hertz.length + " frequencies were given");
         }
         double[] scratch = new double[SpectralChain.SLOTS * mu.length];
-        double[] out = new double[3];
+        double[] out = new double[4];
         for (int i = 0; i < hertz.length; i++) {
             double hz = checkHertz("frequency [" + i + "]", hertz[i]);
             SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, scratch, out);
@@ -180,7 +180,7 @@ public final class CouplingEvaluation {
     }
 
     private CouplingResult evaluate(Frequency frequency, double hz) {
-        double[] out = new double[3];
+        double[] out = new double[4];
         SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, new double[SpectralChain.SLOTS * mu.length], out);
         double il = lossDb(out, hz);
         double logM = logAbs(out[0], out[1]) - out[2];
@@ -190,7 +190,7 @@ public final class CouplingEvaluation {
     }
 
     private double lossDb(double[] out, double hz) {
-        double db = CouplingResult.DB_PER_NEPER * (Math.log(pair.rule().freeSpace) - logAbs(out[0], out[1]) + out[2]);
+        double db = CouplingResult.DB_PER_NEPER * (Math.log(out[3]) - logAbs(out[0], out[1]) + out[2]);
         if (!Double.isFinite(db)) {
             // Only a permeability model that breaks its contract (NaN, µ' ≤ 0) can get here.
             throw new ArithmeticException("insertion loss of " + barrier + " between " + pair + " at " + hz

@@ -47,7 +47,8 @@ final class SpectralChain {
      * @param mu      permeability models
      * @param hz      frequency in Hz
      * @param scratch at least SLOTS·n doubles, overwritten
-     * @param out     receives [0] Re, [1] Im of the scaled sum in H, [2] Λ0 in nepers
+     * @param out     receives [0] Re, [1] Im of the scaled sum in H, [2] Λ0 in nepers, [3] the
+     *                free-space sum over the same nodes in H (the reference for insertion loss)
      */
     static void sum(SpectralRule rule, double[] t, double[] sigma, PermeabilityModel[] mu, double hz,
                     double[] scratch, double[] out) {
@@ -55,6 +56,11 @@ final class SpectralChain {
         final double wMu0 = 2 * Math.PI * hz * PhysicalConstants.MU_0;
         double lambda0 = 0;
         double total = 0;
+        // The smallest wavenumber scale at which the stack's F(λ) has a feature (a branch point
+        // at |λ| = |κ|, the thin-sheet pole near ωµ0σt/2, the magnetic pole near 2/(µr·t),
+        // poles near 1/t, the width sqrt(|κ|/t) of a thick layer's spectrum).
+        double feature = Double.POSITIVE_INFINITY;
+        boolean transparent = true;
         for (int i = 0; i < n; i++) {
             double mr = mu[i].real(hz);
             double ml = mu[i].loss(hz);
@@ -71,13 +77,39 @@ final class SpectralChain {
             double mod = Math.sqrt(kr * kr + ki * ki);
             lambda0 += Math.sqrt(0.5 * (mod + kr)) * t[i];
             total += t[i];
+            double mu2 = mr * mr + ml * ml;
+            boolean magnetic = Math.abs(mr - 1) > 1e-9 || ml > 0;
+            if (sigma[i] > 0 || magnetic) {
+                transparent = false;
+            }
+            feature = Math.min(feature, 1 / t[i]);
+            if (sigma[i] > 0) {
+                double kappa = Math.sqrt(mod);
+                feature = Math.min(feature, Math.min(kappa, 0.5 * wMu0 * sigma[i] * t[i]));
+                if (kappa * t[i] > 1) {
+                    feature = Math.min(feature, Math.sqrt(kappa / t[i]));
+                }
+            }
+            if (magnetic) {
+                double m = Math.sqrt(mu2);
+                feature = Math.min(feature, 2 / (Math.max(m, 1 / m) * t[i]));
+            }
         }
+        if (transparent) {
+            feature = Double.POSITIVE_INFINITY;
+        }
+        final boolean smooth = feature >= rule.smoothScale;
         final double[] lam = rule.lambda;
         final double[] wt = rule.weight;
         final double logPrefactor = (n + 1) * LN2 + lambda0;
         double sumR = 0;
         double sumI = 0;
+        final int skipFrom = smooth ? rule.gradedFrom : 0;
+        final int skipTo = smooth ? rule.uniformFrom : rule.gradedFrom;
         for (int k = 0; k < lam.length; k++) {
+            if (k == skipFrom) {
+                k = skipTo;
+            }
             final double l = lam[k];
             final double l2 = l * l;
             double ar = 1, ai = 0, br = 0, bi = 0, cr = 0, ci = 0, dr = 1, di = 0;
@@ -165,5 +197,6 @@ final class SpectralChain {
         out[0] = sumR;
         out[1] = sumI;
         out[2] = lambda0;
+        out[3] = smooth ? rule.freeSpaceCoarse : rule.freeSpace;
     }
 }

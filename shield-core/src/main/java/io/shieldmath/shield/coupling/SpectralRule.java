@@ -23,6 +23,8 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  *       sheet, the 2/(µr·t) roll-off of a high-permeability sheet, the skin-depth scale), which
  *       may lie decades below 1/ρ; features of F have a width comparable with their position,
  *       so a constant ratio between panel ends resolves them wherever they fall.</li>
+ *   <li>or, when every feature scale of the stack at the frequency evaluated is above 2H
+ *       (see {@link SpectralChain}), [0, H/4] as one {@value #UNIFORM_NODES}-point panel;</li>
  *   <li>[H/4, 26/s]: equal panels of width H, {@value #UNIFORM_NODES}-point Gauss–Legendre,
  *       each spanning at most 6 radians of the kernel's fastest oscillation J1(λρ)² ~ sin(2λρ)
  *       and a factor e^{−6} of its decay. Beyond 26/s the kernel is below e^{−26} ≈ 5e-12
@@ -47,8 +49,21 @@ final class SpectralRule {
     final double[] lambda;
     /** The weights including the kernel, in H·m (so Σ W_k·F(λ_k) is in henries). */
     final double[] weight;
-    /** Σ W_k: the free-space mutual inductance by this rule, in H. */
+    /** The first node of the graded panels; nodes before it form the single panel over [0, H/4]. */
+    final int gradedFrom;
+    /** The first node of the equal panels. */
+    final int uniformFrom;
+    /**
+     * The smallest feature scale of the stack (in 1/m) for which the single panel over
+     * [0, H/4] replaces the graded ones: 2H, eight times the panel's length, so that the
+     * transmission is analytic in a disc of radius 2H about λ = 0 and the 12-point rule
+     * on the panel converges like 5.8^{−24}.
+     */
+    final double smoothScale;
+    /** Σ W_k over the graded and equal panels: the free-space mutual inductance by this rule, in H. */
     final double freeSpace;
+    /** The same with the single panel over [0, H/4] in place of the graded ones, in H. */
+    final double freeSpaceCoarse;
 
     SpectralRule(double[] txRadius, double[] txDepth, double txTurns, double[] rxRadius, double[] rxDepth,
                  double rxTurns, double gap) {
@@ -63,10 +78,13 @@ final class SpectralRule {
         double top = CUT_OFF / gap;
         double start = 0.25 * h;
         int uniform = Math.max(1, (int) Math.ceil((top - start) / h));
-        int n = (GRADED_PANELS + 1) * GRADED_NODES + uniform * UNIFORM_NODES;
+        int n = UNIFORM_NODES + (GRADED_PANELS + 1) * GRADED_NODES + uniform * UNIFORM_NODES;
         lambda = new double[n];
         weight = new double[n];
-        int k = 0;
+        smoothScale = 8 * start;
+        // [0, H/4] in one panel, used when the stack has no feature near that range.
+        int k = panel(UNIFORM, 0, start, 0);
+        gradedFrom = k;
         // Graded panels, from 0 upwards.
         double lo = 0;
         double hi = start * Math.pow(4, -GRADED_PANELS);
@@ -75,6 +93,7 @@ final class SpectralRule {
             lo = hi;
             hi *= 4;
         }
+        uniformFrom = k;
         for (int p = 0; p < uniform; p++) {
             k = panel(UNIFORM, start + h * p, start + h * (1 + p), k);
         }
@@ -84,9 +103,16 @@ final class SpectralRule {
             double kernel = PhysicalConstants.MU_0 * Math.PI * txTurns * rxTurns
                     * spectrum(txRadius, txDepth, l) * spectrum(rxRadius, rxDepth, l) * Math.exp(-l * gap);
             weight[i] *= kernel;
+        }
+        for (int i = gradedFrom; i < n; i++) {
             sum += weight[i];
         }
         freeSpace = sum;
+        double coarse = 0;
+        for (int i = 0; i < n; i++) {
+            coarse += i < gradedFrom || i >= uniformFrom ? weight[i] : 0;
+        }
+        freeSpaceCoarse = coarse;
     }
 
     private int panel(GaussLegendre rule, double lo, double hi, int k) {

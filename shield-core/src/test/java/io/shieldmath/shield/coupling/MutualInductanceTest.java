@@ -64,6 +64,8 @@ class MutualInductanceTest {
                     assertEquals(exact, p.freeSpaceMutualInductance(), 1e-14 * exact);
                     assertEquals(exact, p.rule().freeSpace, 1e-9 * exact,
                             "a " + a + ", b " + b + ", z " + z);
+                    assertEquals(exact, p.rule().freeSpaceCoarse, 1e-9 * exact,
+                            "single first panel: a " + a + ", b " + b + ", z " + z);
                 }
             }
         }
