@@ -15,4 +15,5 @@ module io.shieldmath.shield.core {
     exports io.shieldmath.shield.planar;
     exports io.shieldmath.shield.design;
     exports io.shieldmath.shield.enclosure;
+    exports io.shieldmath.shield.coupling;
 }

@@ -1,0 +1,71 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.coupling;
+
+import io.shieldmath.shield.quantity.Require;
+import java.util.Locale;
+
+/**
+ * The amplitude of a sinusoidal voltage, such as the voltage induced in the receiving coil,
+ * readable as peak, peak-to-peak or RMS.
+ *
+ * <p>Amplitude: finite and 0 V or more (an induced voltage may underflow to 0 behind a very
+ * thick barrier). Immutable and thread-safe; equality is by value.
+ */
+public final class SineVoltage {
+
+    private final double peak;
+
+    private SineVoltage(double peak) {
+        this.peak = peak;
+    }
+
+    /**
+     * A voltage amplitude.
+     *
+     * @param volts   the amplitude in V as stated by {@code measure}, finite and 0 or more
+     * @param measure how the amplitude is stated, not null
+     * @return the voltage
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the amplitude is negative or not finite
+     */
+    public static SineVoltage ofVolts(double volts, AmplitudeMeasure measure) {
+        Require.nonNull("amplitude measure", measure);
+        return new SineVoltage(measure.toPeak(Require.nonNegative("voltage", volts, "V " + measure.symbol())));
+    }
+
+    /**
+     * The amplitude in a measure.
+     *
+     * @param measure the measure, not null
+     * @return the amplitude in V
+     */
+    public double volts(AmplitudeMeasure measure) {
+        return Require.nonNull("measure", measure).fromPeak(peak);
+    }
+
+    /**
+     * The amplitude in millivolts in a measure.
+     *
+     * @param measure the measure, not null
+     * @return the amplitude in mV
+     */
+    public double millivolts(AmplitudeMeasure measure) {
+        return volts(measure) * 1e3;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof SineVoltage v && Double.compare(v.peak, peak) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return Double.hashCode(peak);
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "%.6g V pk", peak);
+    }
+}
