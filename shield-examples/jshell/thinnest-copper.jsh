@@ -1,0 +1,16 @@
+// How thin can a copper plate be and still give 60 dB from 10 kHz to 100 kHz in a plane wave
+// and in the near field of a loop 10 cm away?
+import static io.shieldmath.shield.quantity.Quantities.*;
+import io.shieldmath.shield.field.*;
+import io.shieldmath.shield.planar.*;
+import io.shieldmath.shield.design.*;
+import io.shieldmath.shield.quantity.FrequencyBand;
+import io.shieldmath.shield.materials.*;
+
+var copper = Catalogue.builtIn().get("copper-annealed");
+var band = FrequencyBand.of(kHz(10), kHz(100));
+for (var field : new IncidentField[] {IncidentField.planeWave(),
+        IncidentField.magneticNearField(cm(10), ImpedanceForm.TEXTBOOK)}) {
+    var s = ThicknessSolver.minimumThickness(Barrier.of(copper, mm(1)), 0, field, band, 60, mm(10));
+    System.out.println(field + ": " + s.explanation());
+}
