@@ -1,8 +1,7 @@
 // Quick look: how much does half a millimetre of copper or of 80 % nickel-iron give,
 // 5 cm from a small magnetic source, at mains frequency and at 20 kHz?
-// Run from the repository root after building:
-//   ./mvnw -q -B -DskipTests package
-//   jshell --class-path "shield-core/target/classes:shield-materials/target/classes:$HOME/.m2/repository/org/apache/commons/commons-math3/3.6.1/commons-math3-3.6.1.jar:..." shield-examples/jshell/quick-look.jsh
+// Run from the repository root after building (./mvnw -q -B -DskipTests package):
+//   jshell --class-path shield-examples/target/shield-all.jar shield-examples/jshell/quick-look.jsh
 import static io.shieldmath.shield.quantity.Quantities.*;
 import io.shieldmath.shield.field.*;
 import io.shieldmath.shield.planar.*;

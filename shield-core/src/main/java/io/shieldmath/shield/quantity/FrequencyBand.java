@@ -93,7 +93,8 @@ public final class FrequencyBand {
     }
 
     /**
-     * Log-spaced frequencies from low to high, both ends included exactly.
+     * Log-spaced frequencies from low to high, both ends included exactly, the points between
+     * rounded to 12 significant digits.
      *
      * @param points the number of points, 1 or more (1 gives the low end only; a
      *               single-frequency band gives that frequency repeated)
@@ -114,7 +115,8 @@ public final class FrequencyBand {
         double la = Math.log(a);
         double step = (Math.log(b) - la) / (points - 1);
         for (int i = 0; i < points; i++) {
-            f[i] = Math.exp(la + step * i);
+            // Rounded to 12 significant digits so that decade points come out as 1000, not 1000.0000000000002.
+            f[i] = new java.math.BigDecimal(Math.exp(la + step * i)).round(new java.math.MathContext(12)).doubleValue();
         }
         f[0] = a;
         f[points - 1] = b;
