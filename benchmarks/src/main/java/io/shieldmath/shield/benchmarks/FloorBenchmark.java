@@ -14,6 +14,7 @@ import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Threads;
 import org.openjdk.jmh.annotations.Warmup;
 import org.openjdk.jmh.infra.Blackhole;
 
@@ -55,6 +56,22 @@ public class FloorBenchmark {
      */
     @Benchmark
     public void floor(Blackhole bh) {
+        work(bh);
+    }
+
+    /**
+     * The same work on two threads at once: the scaling this machine gives to perfectly
+     * parallel work during the run, beside which the sweep's thread scaling is read.
+     *
+     * @param bh the sink
+     */
+    @Benchmark
+    @Threads(2)
+    public void floorTwoThreads(Blackhole bh) {
+        work(bh);
+    }
+
+    private void work(Blackhole bh) {
         double mod = Math.sqrt(g2r * g2r + g2i * g2i);
         double gr = Math.sqrt(0.5 * (mod + g2r));
         double gi = Math.copySign(Math.sqrt(0.5 * (mod - g2r)), g2i);

@@ -44,6 +44,7 @@ public final class RatioTable {
 
     private static final String PACKAGE = RatioTable.class.getPackageName() + ".";
     private static final String FLOOR = "FloorBenchmark.floor";
+    private static final String FLOOR_TWO = "FloorBenchmark.floorTwoThreads";
     private static final String POINT = "PlanarPointBenchmark.shield";
     private static final String COMMONS = "PlanarPointBenchmark.commonsMath";
     private static final String SWEEP_ONE = "PlanarSweepBenchmark.sweepOneThread";
@@ -99,15 +100,20 @@ public final class RatioTable {
         double score = primary.path("score").asDouble();
         double error = primary.path("scoreError").asDouble(Double.NaN);
         String unit = primary.path("scoreUnit").asString();
-        double ns = toNanosPerOp(score, unit);
-        double nsError = Double.isFinite(error) ? Math.abs(ns - toNanosPerOp(score + error, unit)) : Double.NaN;
+        int threads = r.path("threads").asInt(1);
+        // Average time is per thread; throughput is summed over the threads. Both become wall
+        // time per operation with all threads running.
+        double perThread = unit.endsWith("/op") ? threads : 1;
+        double ns = toNanosPerOp(score, unit) / perThread;
+        double nsError = Double.isFinite(error)
+                ? Math.abs(ns - toNanosPerOp(score + error, unit) / perThread) : Double.NaN;
         double bytes = Double.NaN;
         for (Map.Entry<String, JsonNode> e : r.path("secondaryMetrics").properties()) {
             if (e.getKey().endsWith("gc.alloc.rate.norm")) {
                 bytes = e.getValue().path("score").asDouble();
             }
         }
-        return new Row(name, r.path("mode").asString(), r.path("threads").asInt(1), ns, nsError, bytes);
+        return new Row(name, r.path("mode").asString(), threads, ns, nsError, bytes);
     }
 
     /** Nanoseconds per operation from a JMH score; for throughput over several threads, wall time per operation. */
@@ -157,8 +163,9 @@ public final class RatioTable {
                     floor.map(f -> fixed(r.nanosPerOp() / f.nanosPerOp(), 2)).orElse("n/a"), bytes(r.bytesPerOp()));
         }
         out.println();
-        out.println("One op is one frequency point, except where a benchmark's javadoc says otherwise; sweep rows are "
-                + "wall time per point with all threads running.");
+        out.println("One op is one frequency point (the floor: one complex square root and one complex exponential), except where a "
+                + "benchmark's javadoc says otherwise; rows on 2 threads give wall time per op with both threads running. "
+                + "± is JMH's 99.9 % confidence interval.");
         out.println();
         out.println("| target | measured | verdict |");
         out.println("|---|---|---|");
@@ -180,6 +187,9 @@ public final class RatioTable {
         }
         target(out, "sweep on 2 threads ≥ " + fixed(SCALING_TARGET, 1) + "× the points per second of 1",
                 ratio(find(SWEEP_ONE), find(SWEEP_TWO)), "× on 2 threads", r -> r >= SCALING_TARGET);
+        ratio(floor, find(FLOOR_TWO)).ifPresent(r -> out.printf(Locale.ROOT,
+                "%nIn the same run the floor, perfectly parallel work, ran %s× faster on 2 threads than on 1: "
+                        + "the scaling this machine gave while it was measured.%n", fixed(r, 2)));
         find(SWEEP_ONE).ifPresent(s -> {
             double pps = 1e9 / s.nanosPerOp();
             out.println();
