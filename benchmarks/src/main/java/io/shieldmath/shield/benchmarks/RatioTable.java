@@ -188,8 +188,8 @@ public final class RatioTable {
         target(out, "sweep on 2 threads ≥ " + fixed(SCALING_TARGET, 1) + "× the points per second of 1",
                 ratio(find(SWEEP_ONE), find(SWEEP_TWO)), "× on 2 threads", r -> r >= SCALING_TARGET);
         ratio(floor, find(FLOOR_TWO)).ifPresent(r -> out.printf(Locale.ROOT,
-                "%nIn the same run the floor, perfectly parallel work, ran %s× faster on 2 threads than on 1: "
-                        + "the scaling this machine gave while it was measured.%n", fixed(r, 2)));
+                "%nIn the same run the floor (perfectly parallel work) on 2 threads gave %s× the throughput of 1 "
+                        + "thread: the scaling this machine allowed while it was measured.%n", fixed(r, 2)));
         find(SWEEP_ONE).ifPresent(s -> {
             double pps = 1e9 / s.nanosPerOp();
             out.println();
