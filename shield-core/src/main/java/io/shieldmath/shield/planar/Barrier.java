@@ -4,6 +4,7 @@
 package io.shieldmath.shield.planar;
 
 import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.medium.PermeabilityModel;
@@ -40,6 +41,8 @@ public final class Barrier {
     final PermeabilityModel[] mu;
     /** The total thickness in a one-element array, for the free-space reference. */
     final double[] total;
+    /** True if every layer is free space (σ = 0, µr = 1, εr = 1): the barrier is its own reference. */
+    final boolean freeSpaceOnly;
 
     private Barrier(List<Layer> layers) {
         if (layers.isEmpty()) {
@@ -56,6 +59,7 @@ public final class Barrier {
         epsilon = new double[n];
         mu = new PermeabilityModel[n];
         double sum = 0;
+        boolean vacuum = true;
         for (int i = 0; i < n; i++) {
             Layer l = Require.nonNull("layer " + (i + 1), layers.get(i));
             Medium m = l.medium();
@@ -65,8 +69,10 @@ public final class Barrier {
             epsilon[i] = m.permittivity().value();
             mu[i] = m.permeability();
             sum += thickness[i];
+            vacuum &= sigma[i] == 0 && epsilon[i] == 1 && mu[i].equals(ConstantPermeability.ONE);
         }
         total = new double[] {sum};
+        freeSpaceOnly = vacuum;
     }
 
     /**

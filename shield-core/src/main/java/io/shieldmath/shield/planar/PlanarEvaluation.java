@@ -80,8 +80,7 @@ public final class PlanarEvaluation {
         double zi = field.impedanceImaginary(hz);
         double logT = ChainMatrix.logTransmission(barrier.thickness, barrier.sigma, barrier.epsilon, barrier.mu,
                 hz, zr, zi, parts);
-        double logFree = ChainMatrix.logFreeSpaceTransmission(barrier.total, hz, zr, zi);
-        double se = ChainMatrix.DB_PER_NEPER * (logFree - logT);
+        double se = ChainMatrix.DB_PER_NEPER * (logFreeSpace(hz, zr, zi, logT) - logT);
         double[] absorption = new double[n];
         System.arraycopy(parts, 2, absorption, 0, n);
         requireFinite(se, hz);
@@ -137,7 +136,12 @@ public final class PlanarEvaluation {
                     + hertz.length + " frequencies were given");
         }
         for (int i = 0; i < hertz.length; i++) {
-            outDb[i] = seDb(checkHertz("frequency [" + i + "]", hertz[i]));
+            double hz = hertz[i];
+            if (!(hz >= MIN_HERTZ && hz <= MAX_HERTZ)) {
+                // The message (a new string) is built only on failure: nothing is allocated per point.
+                checkHertz("frequency [" + i + "]", hz);
+            }
+            outDb[i] = seDb(hz);
         }
         return outDb;
     }
@@ -157,10 +161,18 @@ public final class PlanarEvaluation {
         double zi = field.impedanceImaginary(hz);
         double logT = ChainMatrix.logTransmission(barrier.thickness, barrier.sigma, barrier.epsilon, barrier.mu,
                 hz, zr, zi, null);
-        double logFree = ChainMatrix.logFreeSpaceTransmission(barrier.total, hz, zr, zi);
-        double se = ChainMatrix.DB_PER_NEPER * (logFree - logT);
+        double se = ChainMatrix.DB_PER_NEPER * (logFreeSpace(hz, zr, zi, logT) - logT);
         requireFinite(se, hz);
         return se;
+    }
+
+    /**
+     * ln |T| of the same thickness of free space. A barrier made only of free space is its
+     * own reference, so its SE is exactly 0 dB (DOMAIN §2) whatever the rounding of the
+     * closed form and of the layer product; any other barrier uses the closed form.
+     */
+    private double logFreeSpace(double hz, double zr, double zi, double logT) {
+        return barrier.freeSpaceOnly ? logT : ChainMatrix.logFreeSpaceTransmission(barrier.total[0], hz, zr, zi);
     }
 
     private void requireFinite(double se, double hz) {
