@@ -215,7 +215,8 @@ public final class DesignStudy {
         out.println(String.format(Locale.ROOT, "infinite sheets of %.0f cm x %.0f cm for their mass; cans are "
                 + "closed boxes of %.0f x %.0f x %.0f cm", Math.sqrt(PLATE_AREA_M2) * 100,
                 Math.sqrt(PLATE_AREA_M2) * 100, CAN_SIDES_M[0] * 100, CAN_SIDES_M[1] * 100, CAN_SIDES_M[2] * 100));
-        out.println("in the locally uniform ambient field, each with a vent; materials from the built-in");
+        out.println("in the locally uniform ambient field, each with a vent; plates see the transformer's");
+        out.println("field (30 cm) below 1 kHz and the charger's (6 cm) above; materials from the built-in");
         out.println("catalogue at 20 °C.");
         out.println();
         out.println("Required shielding per band");
@@ -298,11 +299,12 @@ public final class DesignStudy {
         for (Requirement.Entry e : need.entries()) {
             double lo = e.band().low().toHertz();
             double hi = e.band().high().toHertz();
-            if (lo == hi) {
-                lo /= 1.08;
-                hi *= 1.08;
-            }
-            segments.add(new SeChart.Curve("required, " + e.band(), new double[] {lo, hi},
+            // widen each band on the plot so that it can be seen: a quarter of a decade at least
+            double mid = Math.sqrt(lo * hi);
+            lo = Math.min(lo, mid / 1.33);
+            hi = Math.max(hi, mid * 1.33);
+            segments.add(new SeChart.Curve(segments.isEmpty() ? "required SE per band" : "required, " + e.band(),
+                    new double[] {lo, hi},
                     new double[] {e.requiredDb(), e.requiredDb()}));
         }
         return segments;
