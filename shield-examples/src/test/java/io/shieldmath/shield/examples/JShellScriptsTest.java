@@ -33,6 +33,11 @@ class JShellScriptsTest {
 
     /** Runs a script, returning what it printed; fails on any rejected snippet or exception. */
     static String run(Path script) throws IOException {
+        return run(script.toString(), Files.readString(script, StandardCharsets.UTF_8));
+    }
+
+    /** Runs JShell source, returning what it printed; fails on any rejected snippet or exception. */
+    static String run(String name, String text) {
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         PrintStream out = new PrintStream(bytes, true, StandardCharsets.UTF_8);
         List<String> problems = new ArrayList<>();
@@ -43,7 +48,7 @@ class JShellScriptsTest {
             for (String entry : System.getProperty("java.class.path").split(File.pathSeparator)) {
                 shell.addToClasspath(entry);
             }
-            String remaining = Files.readString(script, StandardCharsets.UTF_8);
+            String remaining = text;
             SourceCodeAnalysis analysis = shell.sourceCodeAnalysis();
             while (!remaining.isBlank()) {
                 SourceCodeAnalysis.CompletionInfo info = analysis.analyzeCompletion(remaining);
@@ -66,7 +71,7 @@ class JShellScriptsTest {
         } finally {
             System.setOut(saved);
         }
-        assertTrue(problems.isEmpty(), () -> script + ":\n" + String.join("\n", problems));
+        assertTrue(problems.isEmpty(), () -> name + ":\n" + String.join("\n", problems));
         return bytes.toString(StandardCharsets.UTF_8);
     }
 
