@@ -16,8 +16,11 @@ public final class InvalidQuantityException extends IllegalArgumentException {
 
     private static final long serialVersionUID = 1L;
 
+    /** The name of the refused quantity. */
     private final String quantity;
+    /** The refused value with its unit, or the refused text in quotes. */
     private final String value;
+    /** The allowed range or accepted form, in words. */
     private final String allowed;
 
     /**

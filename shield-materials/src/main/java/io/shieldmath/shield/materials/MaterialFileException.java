@@ -17,9 +17,13 @@ public final class MaterialFileException extends RuntimeException {
 
     private static final long serialVersionUID = 1L;
 
+    /** The JSON path of the offending value. */
     private final String path;
+    /** The line of the offending value, from 1. */
     private final int line;
+    /** The column of the offending value, from 1. */
     private final int column;
+    /** What is wrong, in words. */
     private final String problem;
 
     /**
