@@ -16,6 +16,7 @@ import io.shieldmath.shield.design.ShieldingModel;
 import io.shieldmath.shield.enclosure.Enclosure;
 import io.shieldmath.shield.enclosure.EnclosureEvaluation;
 import io.shieldmath.shield.enclosure.Opening;
+import io.shieldmath.shield.enclosure.SaturationCheck;
 import io.shieldmath.shield.enclosure.Shell;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.field.ImpedanceForm;
@@ -27,6 +28,8 @@ import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
+import io.shieldmath.shield.quantity.MagneticFieldStrength;
+import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
@@ -76,7 +79,7 @@ public final class DesignStudy {
 
     /** One evaluated candidate. */
     record Evaluated(String name, String kind, double massGrams, MarginReport margin, String limitingPath,
-                     List<DesignLayer> wall, double[] sweepDb) {
+                     List<DesignLayer> wall, double[] sweepDb, Shell shell) {
     }
 
     /** What the study found, for callers and tests. */
@@ -135,6 +138,7 @@ public final class DesignStudy {
                 List.of(DesignLayer.of(aluminium, mm(2))), vent, need, sweepHz));
 
         Evaluated best = printRanking(out, results);
+        printSaturation(out, best, need);
         printCautions(out);
 
         writeCsv(folder.resolve("sweeps.csv"), sweepHz, results);
@@ -177,7 +181,7 @@ public final class DesignStudy {
             }
         }
         return new Evaluated(name, kind, mass, need.marginOf(model), "the plate (edges ignored)", layers,
-                sweep(model, sweepHz));
+                sweep(model, sweepHz), null);
     }
 
     private static Evaluated can(String kind, String name, Shell shell, List<DesignLayer> wallSourceSideFirst,
@@ -194,7 +198,7 @@ public final class DesignStudy {
                 mass += l.material().get().arealMass(l.thickness()) * area * 1000;
             }
         }
-        return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(model, sweepHz));
+        return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(model, sweepHz), shell);
     }
 
     private static double[] sweep(ShieldingModel m, double[] hz) {
@@ -265,6 +269,34 @@ public final class DesignStudy {
         out.println("numbers are infinite-sheet estimates shown for comparison: field leaking around the edges");
         out.println("of a real plate limits it (often to 10-20 dB), so they are not recommended on their own.");
         return best;
+    }
+
+    /** The saturation check of the recommended can's high-µ walls in the strongest incident field. */
+    private static void printSaturation(PrintStream out, Evaluated best, Requirement need) {
+        if (best == null || best.shell() == null) {
+            return;
+        }
+        MagneticFluxDensity strongest = MagneticFluxDensity.ofTesla(0);
+        for (Requirement.Entry e : need.entries()) {
+            if (e.incident().compareTo(strongest) > 0) {
+                strongest = e.incident();
+            }
+        }
+        for (DesignLayer l : best.wall()) {
+            if (l.material().isPresent() && l.material().get().saturation().isPresent()) {
+                SaturationCheck c = best.shell().saturation(MagneticFieldStrength.from(strongest),
+                        l.material().get().saturation().get());
+                double worst = 0;
+                for (int i = 0; i < c.wallCount(); i++) {
+                    worst = Math.max(worst, c.fractionOfSaturation(i));
+                }
+                out.println(String.format(Locale.ROOT, "Saturation (static check, strongest ambient field %s):%n"
+                        + "  the %s wall carries at most %.2g %% of its saturation flux density (%s)%s.", strongest,
+                        l.material().get().name(), 100 * worst, l.material().get().saturation().get(),
+                        c.isWarning() ? "; WARNING: near saturation, thicken the wall" : ", far from saturation"));
+                return;
+            }
+        }
     }
 
     private static void printCautions(PrintStream out) {
