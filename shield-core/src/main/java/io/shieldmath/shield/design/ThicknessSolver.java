@@ -83,8 +83,10 @@ public final class ThicknessSolver {
         Require.inRange("thickness limit", hi, lo, 100, "m");
         double xLo = Math.log(lo);
         double xHi = Math.log(hi);
-        java.util.function.DoubleUnaryOperator margin =
-                x -> BandSearch.worst(modelOfThickness.apply(Math.exp(x)), band).seDb() - targetDb;
+        // The ends of the bracket are evaluated at exactly lo and hi: exp(log(hi)) can round below hi,
+        // and a target met exactly at the limit would then leave the solver without a sign change.
+        java.util.function.DoubleUnaryOperator margin = x -> BandSearch.worst(modelOfThickness.apply(
+                x >= xHi ? hi : x <= xLo ? lo : Math.exp(x)), band).seDb() - targetDb;
         BandSearch.WorstCase atLimit = BandSearch.worst(modelOfThickness.apply(hi), band);
         if (atLimit.seDb() < targetDb) {
             return ThicknessSolution.notFound(targetDb, limit, atLimit, String.format(Locale.ROOT,
@@ -101,7 +103,7 @@ public final class ThicknessSolver {
         double bracketLo = xLo;
         double bracketHi = xHi;
         for (int i = 1; i <= SCAN_POINTS; i++) {
-            double x = xLo + (xHi - xLo) * i / SCAN_POINTS;
+            double x = i == SCAN_POINTS ? xHi : xLo + (xHi - xLo) * i / SCAN_POINTS;
             double g = i == SCAN_POINTS ? atLimit.seDb() - targetDb : margin.applyAsDouble(x);
             if (g >= 0) {
                 bracketLo = prevX;
