@@ -5,7 +5,7 @@ package io.shieldmath.shield.coupling;
 
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.quantity.Length;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 
 /**
  * Two coaxial coils, a transmitter and a receiver, with their centre planes a distance d

@@ -6,7 +6,7 @@ package io.shieldmath.shield.coupling;
 import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.Frequency;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 import org.apache.commons.math3.complex.Complex;
 

@@ -3,7 +3,7 @@
  */
 package io.shieldmath.shield.coupling;
 
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 
 /**

@@ -5,7 +5,7 @@ package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;

@@ -4,7 +4,7 @@
 package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.medium.MediumSource;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 import java.util.OptionalDouble;
 

@@ -7,7 +7,7 @@ import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;

@@ -6,7 +6,7 @@ package io.shieldmath.shield.design;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;

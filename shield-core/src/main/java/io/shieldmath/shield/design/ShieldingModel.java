@@ -4,7 +4,7 @@
 package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.planar.PlanarEvaluation;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 
 /**
  * Anything that gives a shielding effectiveness at a frequency: a planar barrier facing

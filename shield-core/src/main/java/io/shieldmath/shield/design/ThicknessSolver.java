@@ -7,7 +7,7 @@ import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 import java.util.function.DoubleFunction;
 import org.apache.commons.math3.analysis.solvers.AllowedSolution;

@@ -3,7 +3,7 @@
  */
 package io.shieldmath.shield.design;
 
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Arrays;
 import java.util.Locale;
 

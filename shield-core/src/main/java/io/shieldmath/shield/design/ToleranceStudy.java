@@ -11,7 +11,7 @@ import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;

@@ -4,7 +4,7 @@
 package io.shieldmath.shield.enclosure;
 
 import io.shieldmath.shield.field.IncidentField;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.List;
 

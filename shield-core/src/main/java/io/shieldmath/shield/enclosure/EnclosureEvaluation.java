@@ -6,7 +6,7 @@ package io.shieldmath.shield.enclosure;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.List;
 

@@ -5,7 +5,7 @@ package io.shieldmath.shield.enclosure;
 
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.PhysicalConstants;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Objects;
 import java.util.Optional;
 

@@ -13,7 +13,7 @@ import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;

@@ -6,7 +6,7 @@ package io.shieldmath.shield.field;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.PhysicalConstants;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Objects;
 import org.apache.commons.math3.complex.Complex;
 

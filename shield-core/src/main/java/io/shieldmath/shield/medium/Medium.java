@@ -8,7 +8,7 @@ import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.RelativePermeability;
 import io.shieldmath.shield.quantity.RelativePermittivity;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 
 /**
  * A homogeneous, isotropic, linear medium: conductivity σ, relative permeability model

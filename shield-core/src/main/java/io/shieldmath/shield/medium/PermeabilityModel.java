@@ -6,7 +6,7 @@ package io.shieldmath.shield.medium;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.RelativePermeability;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 
 /**
  * The relative permeability of a medium as a function of frequency,

@@ -4,7 +4,7 @@
 package io.shieldmath.shield.medium;
 
 import io.shieldmath.shield.quantity.Frequency;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 
 /**
  * A first-order relaxation µ(f) = µdc/(1 + j·f/fc), the simplest model of the fall of a

@@ -9,7 +9,7 @@ import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.quantity.Length;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.quantity.SheetResistance;
 import java.util.ArrayList;
 import java.util.Collections;

@@ -7,7 +7,7 @@ import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.Length;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.quantity.SheetResistance;
 
 /**

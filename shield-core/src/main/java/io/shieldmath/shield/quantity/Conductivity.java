@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * An electrical conductivity σ. Zero is allowed (insulators, air).
  *

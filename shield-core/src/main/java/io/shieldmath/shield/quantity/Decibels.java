@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * A level in decibels of a field-amplitude ratio: 20·log10 of the ratio, so 20 dB is a
  * factor of 10 in field. Negative values are allowed (a multiple-reflection correction,

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * A frequency of an alternating field. Static fields are not frequencies here: models that take a static field say so in their own methods.
  *

@@ -3,6 +3,8 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+
 /**
  * A closed band of frequencies [low, high], for sweeps and worst-case searches.
  *

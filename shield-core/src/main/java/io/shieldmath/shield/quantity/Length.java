@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * A length: a thickness, a distance, a radius or an opening size. Mil and inch are exact (25.4 µm, 25.4 mm).
  *

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * The amplitude of a magnetic field strength H.
  *

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * A relative permeability, possibly complex: µr = µ' − j·µ'' with the time convention
  * e^{jωt} used throughout this library, so magnetic loss makes µ'' positive.

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * A real relative permittivity εr (dielectric constant). Conduction loss is carried by
  * the conductivity, not here.

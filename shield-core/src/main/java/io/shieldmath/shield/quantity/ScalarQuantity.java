@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * Common behaviour of the real-valued quantities: a value held in SI units, comparison,
  * equality by value and the one text form.

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * The sheet resistance Rs of a thin film, plating or coating (Rs = 1/(σ·t)).
  *

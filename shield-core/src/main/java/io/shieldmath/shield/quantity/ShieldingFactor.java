@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+
 /**
  * A shielding factor S: the field at the victim without the shield over the field with
  * it, as a plain number (S = 10^(SE/20)).

@@ -4,7 +4,7 @@
 package io.shieldmath.shield.materials;
 
 import io.shieldmath.shield.quantity.Conductivity;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;

@@ -7,7 +7,7 @@ import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.medium.RelaxationPermeability;
 import io.shieldmath.shield.medium.TabulatedPermeability;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.math.MathContext;

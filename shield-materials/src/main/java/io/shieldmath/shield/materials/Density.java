@@ -4,7 +4,7 @@
 package io.shieldmath.shield.materials;
 
 import io.shieldmath.shield.quantity.InvalidQuantityException;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;

@@ -6,7 +6,7 @@ package io.shieldmath.shield.materials;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Length;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;

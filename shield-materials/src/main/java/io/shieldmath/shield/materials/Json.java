@@ -444,7 +444,7 @@ final class Json {
         RelativePermittivity epsilon = eps == null ? RelativePermittivity.ONE : permittivity(eps);
         Medium m = at(nameNode, () -> Medium.of(Material.checkText("medium name", name, 200), sigma, model, epsilon));
         Node sigmaNode = f.required("conductivity");
-        at(sigmaNode, () -> io.shieldmath.shield.quantity.Require.inRange("medium conductivity",
+        at(sigmaNode, () -> io.shieldmath.shield.internal.Require.inRange("medium conductivity",
                 sigma.toSiemensPerMetre(), 0, 1e9, "S/m"));
         return m;
     }

@@ -11,7 +11,7 @@ import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import io.shieldmath.shield.quantity.RelativePermittivity;
-import io.shieldmath.shield.quantity.Require;
+import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.quantity.SheetResistance;
 import java.util.Collections;
 import java.util.EnumMap;

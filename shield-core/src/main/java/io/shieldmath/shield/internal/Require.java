@@ -1,12 +1,14 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.quantity;
+package io.shieldmath.shield.internal;
+
+import io.shieldmath.shield.quantity.InvalidQuantityException;
 
 /**
  * Boundary checks that throw {@link InvalidQuantityException} with the quantity, the
  * value, the unit and the allowed range in the message. Used by every factory in this
- * library; open to model implementations outside it.
+ * library. Internal: not exported (only to this library's own modules).
  *
  * <p>Stateless and thread-safe.
  */
@@ -100,7 +102,14 @@ public final class Require {
         return value;
     }
 
-    static String show(double value, String unit) {
+    /**
+     * A value and its unit for a message, such as {@code "0.001 m"}.
+     *
+     * @param value the value
+     * @param unit  the unit
+     * @return the text
+     */
+    public static String show(double value, String unit) {
         return Text.number(value) + " " + unit;
     }
 }

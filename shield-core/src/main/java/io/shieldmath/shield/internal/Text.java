@@ -1,8 +1,10 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.quantity;
+package io.shieldmath.shield.internal;
 
+import io.shieldmath.shield.quantity.InvalidQuantityException;
+import io.shieldmath.shield.quantity.Unit;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -17,8 +19,10 @@ import java.util.regex.Pattern;
  * ohm sign, non-breaking and thin spaces, a Unicode minus, {@code u} for micro, a middle
  * dot or none in compound units); writing is one engineering form that reads back to
  * the same double.
+ *
+ * <p>Internal: not exported; the quantity types and the file readers of this library use it.
  */
-final class Text {
+public final class Text {
 
     private static final Pattern NUMBER =
             Pattern.compile("([+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?)(.*)");
@@ -34,7 +38,7 @@ final class Text {
      * @param units    the units of this kind
      * @return the value in SI units (not yet range-checked)
      */
-    static double parse(String quantity, CharSequence text, Unit[] units) {
+    public static double parse(String quantity, CharSequence text, Unit[] units) {
         if (text == null) {
             throw new NullPointerException(quantity + " text must not be null");
         }
@@ -71,8 +75,12 @@ final class Text {
     /**
      * Finds the unit written as {@code unitText}: exact match first, then a match that
      * ignores case where that is unambiguous.
+     *
+     * @param unitText the unit as written
+     * @param units    the units of this kind
+     * @return the unit, or null if none or more than one matches
      */
-    static Unit findUnit(String unitText, Unit[] units) {
+    public static Unit findUnit(String unitText, Unit[] units) {
         String key = canonical(unitText);
         for (Unit u : units) {
             if (canonical(u.symbol()).equals(key)) {
@@ -146,7 +154,7 @@ final class Text {
      * @param siUnit  the SI unit
      * @return the text form
      */
-    static String format(double si, Unit[] display, Unit siUnit) {
+    public static String format(double si, Unit[] display, Unit siUnit) {
         if (!Double.isFinite(si)) {
             return si + " " + siUnit.symbol();
         }
@@ -185,8 +193,13 @@ final class Text {
         return t.toString().replace("E+", "e").replace('E', 'e');
     }
 
-    /** A plain rendering of a double for messages: shortest form, no locale. */
-    static String number(double v) {
+    /**
+     * A plain rendering of a double for messages: shortest form, no locale.
+     *
+     * @param v the value
+     * @return the text
+     */
+    public static String number(double v) {
         if (Double.isNaN(v) || Double.isInfinite(v)) {
             return Double.toString(v);
         }
