@@ -12,5 +12,5 @@ var loop = IncidentField.magneticNearField(cm(5), ImpedanceForm.EXACT_DIPOLE);
 for (String id : new String[] {"copper-annealed", "nickel-iron-80"}) {
     var plate = Barrier.of(catalogue.get(id), mm(0.5)).facing(loop);
     System.out.printf("%-16s 50 Hz: %6.1f dB   20 kHz: %6.1f dB%n", id,
-            plate.at(Hz(50)).totalDb(), plate.at(kHz(20)).totalDb());
+            plate.at(Hz(50)).shieldingEffectivenessDb(), plate.at(kHz(20)).shieldingEffectivenessDb());
 }

@@ -11,6 +11,7 @@ module io.shieldmath.shield.core {
 
     exports io.shieldmath.shield.quantity;
     exports io.shieldmath.shield.medium;
+    exports io.shieldmath.shield.model;
     exports io.shieldmath.shield.field;
     exports io.shieldmath.shield.planar;
     exports io.shieldmath.shield.design;

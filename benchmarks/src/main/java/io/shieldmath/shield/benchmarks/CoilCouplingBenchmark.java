@@ -71,7 +71,7 @@ public class CoilCouplingBenchmark {
      */
     @Benchmark
     public void spectralRule(Blackhole bh) {
-        bh.consume(evaluation.insertionLossDb(HERTZ));
+        bh.consume(evaluation.shieldingEffectivenessDb(HERTZ));
     }
 
     /**
@@ -81,7 +81,7 @@ public class CoilCouplingBenchmark {
      */
     @Benchmark
     public void spectralRuleWithGeometry(Blackhole bh) {
-        bh.consume(pair(coil).through(barrier).insertionLossDb(HERTZ));
+        bh.consume(pair(coil).through(barrier).shieldingEffectivenessDb(HERTZ));
     }
 
     /**

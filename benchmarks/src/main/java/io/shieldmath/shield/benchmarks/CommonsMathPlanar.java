@@ -39,7 +39,8 @@ final class CommonsMathPlanar {
      * @return SE in dB
      */
     static double shieldingEffectivenessDb(Barrier barrier, IncidentField field, double hz) {
-        Complex zw = field.waveImpedance(Frequency.ofHertz(hz));
+        io.shieldmath.shield.quantity.Complex z = field.waveImpedance(Frequency.ofHertz(hz));
+        Complex zw = new Complex(z.real(), z.imaginary());
         Complex t = transmission(barrier, zw, hz);
         Complex free = transmission(Barrier.of(Layer.gap(barrier.totalThickness())), zw, hz);
         return 20 * Math.log10(free.abs() / t.abs());

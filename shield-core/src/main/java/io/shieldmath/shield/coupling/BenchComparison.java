@@ -52,7 +52,7 @@ public final class BenchComparison {
      * @return the comparison, with a model tolerance of 0 dB
      */
     public static BenchComparison of(VoltageReading withoutPlate, VoltageReading withPlate, CouplingResult model) {
-        return of(withoutPlate, withPlate, Require.nonNull("model result", model).insertionLossDb());
+        return of(withoutPlate, withPlate, Require.nonNull("model result", model).shieldingEffectivenessDb());
     }
 
     /**

@@ -7,6 +7,7 @@ import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.planar.PlanarEvaluation;
@@ -14,7 +15,6 @@ import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -41,14 +41,18 @@ import java.util.List;
  * spectrum, below 1e-11 of the free-space coupling, limits the relative accuracy.
  *
  * <p>Valid frequencies: {@value #MIN_HERTZ} Hz to {@value #MAX_HERTZ} Hz. Immutable and
- * thread-safe; {@link #insertionLossDb(double[], double[])} allocates nothing per point.
+ * thread-safe; {@link #shieldingEffectivenessDb(double[], double[])} allocates nothing per point.
+ * The shielding effectiveness of this model is the insertion loss of the barrier between
+ * the coils.
  */
-public final class CouplingEvaluation {
+public final class CouplingEvaluation implements ShieldingModel<CouplingResult> {
 
     /** The lowest frequency evaluated, in Hz. */
     public static final double MIN_HERTZ = 1e-3;
     /** The highest frequency evaluated, in Hz. */
     public static final double MAX_HERTZ = 1e9;
+
+    private static final FrequencyBand VALID = FrequencyBand.of(Frequency.ofHertz(MIN_HERTZ), Frequency.ofHertz(MAX_HERTZ));
 
     private final CoilPair pair;
     private final Barrier barrier;
@@ -107,44 +111,38 @@ public final class CouplingEvaluation {
     }
 
     /**
+     * The frequencies this model evaluates: 1 mHz to 1 GHz.
+     *
+     * @return the valid band
+     */
+    @Override
+    public FrequencyBand validBand() {
+        return VALID;
+    }
+
+    /**
      * The full result at one frequency.
      *
      * @param frequency the frequency, from 1 mHz to 1 GHz, not null
      * @return the result
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is out of range
      */
+    @Override
     public CouplingResult at(Frequency frequency) {
         double hz = checkHertz("frequency", Require.nonNull("frequency", frequency).toHertz());
         return evaluate(frequency, hz);
     }
 
     /**
-     * The results at log-spaced frequencies across a band, both ends included.
-     *
-     * @param band   the band, within 1 mHz to 1 GHz, not null
-     * @param points the number of points, 1 or more
-     * @return the results, lowest frequency first
-     */
-    public List<CouplingResult> sweep(FrequencyBand band, int points) {
-        Require.nonNull("band", band);
-        checkHertz("band lower frequency", band.low().toHertz());
-        checkHertz("band upper frequency", band.high().toHertz());
-        double[] hz = band.logSpacedHertz(points);
-        List<CouplingResult> out = new ArrayList<>(hz.length);
-        for (double f : hz) {
-            out.add(evaluate(Frequency.ofHertz(f), f));
-        }
-        return List.copyOf(out);
-    }
-
-    /**
-     * The insertion loss at one frequency in dB, without creating result objects.
+     * The insertion loss at one frequency in dB, without creating result objects (two
+     * small scratch arrays per call; the batch method reuses one pair for all points).
      *
      * @param hertz the frequency in Hz, from 1 mHz to 1 GHz
      * @return 20·log10|M_free/M| in dB
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is out of range
      */
-    public double insertionLossDb(double hertz) {
+    @Override
+    public double shieldingEffectivenessDb(double hertz) {
         double hz = checkHertz("frequency", hertz);
         double[] out = new double[4];
         SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, new double[SpectralChain.SLOTS * mu.length], out);
@@ -162,7 +160,8 @@ public final class CouplingEvaluation {
      *                                  (named by its index); nothing is written from that index on
      * @throws IllegalArgumentException if {@code outDb} is too short
      */
-    public double[] insertionLossDb(double[] hertz, double[] outDb) {
+    @Override
+    public double[] shieldingEffectivenessDb(double[] hertz, double[] outDb) {
         Require.nonNull("frequencies", hertz);
         Require.nonNull("output array", outDb);
         if (outDb.length < hertz.length) {
@@ -172,7 +171,11 @@ public final class CouplingEvaluation {
         double[] scratch = new double[SpectralChain.SLOTS * mu.length];
         double[] out = new double[4];
         for (int i = 0; i < hertz.length; i++) {
-            double hz = checkHertz("frequency [" + i + "]", hertz[i]);
+            double hz = hertz[i];
+            if (!(hz >= MIN_HERTZ && hz <= MAX_HERTZ)) {
+                // The message (a new string) is built only on failure: nothing is allocated per point.
+                checkHertz("frequency [" + i + "]", hz);
+            }
             SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, scratch, out);
             outDb[i] = lossDb(out, hz);
         }

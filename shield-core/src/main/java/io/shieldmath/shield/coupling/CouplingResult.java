@@ -4,11 +4,11 @@
 package io.shieldmath.shield.coupling;
 
 import io.shieldmath.shield.planar.PlanarResult;
-import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.quantity.Complex;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
-import org.apache.commons.math3.complex.Complex;
 
 /**
  * The coil-to-coil coupling through a barrier at one frequency: free-space and shielded
@@ -27,7 +27,7 @@ import org.apache.commons.math3.complex.Complex;
  *
  * <p>Immutable and thread-safe.
  */
-public final class CouplingResult {
+public final class CouplingResult implements ShieldingResult {
 
     /** Decibels per neper of field amplitude, 20/ln 10. */
     static final double DB_PER_NEPER = 20 / Math.log(10);
@@ -70,13 +70,12 @@ public final class CouplingResult {
     /**
      * The complex mutual inductance with the barrier in place, M = M_free·|M/M_free|·e^{jφ};
      * it underflows to zero behind barriers of more than about 6000 dB (use
-     * {@link #insertionLossDb()} there).
+     * {@link #shieldingEffectivenessDb()} there).
      *
      * @return M in henries
      */
     public Complex shieldedMutualInductance() {
-        double m = Math.exp(logM);
-        return new Complex(m * Math.cos(phase), m * Math.sin(phase));
+        return Complex.ofPolar(Math.exp(logM), phase);
     }
 
     /**
@@ -88,30 +87,23 @@ public final class CouplingResult {
     public Complex mutualImpedance() {
         double w = frequency.angular();
         Complex m = shieldedMutualInductance();
-        return new Complex(-w * m.getImaginary(), w * m.getReal());
+        return Complex.ofCartesian(-w * m.imaginary(), w * m.real());
     }
 
     /**
-     * The insertion loss 20·log10|M_free/M| in dB.
+     * The shielding effectiveness of the barrier between the coils: its insertion loss
+     * 20·log10|M_free/M| in dB.
      *
      * @return the loss, finite
      */
-    public double insertionLossDb() {
+    @Override
+    public double shieldingEffectivenessDb() {
         return lossDb;
     }
 
     /**
-     * The insertion loss.
-     *
-     * @return 20·log10|M_free/M|
-     */
-    public Decibels insertionLoss() {
-        return Decibels.of(lossDb);
-    }
-
-    /**
      * The transmission-line model's shielding effectiveness for the same barrier and frequency
-     * (textbook magnetic wave impedance at r = d), to show beside {@link #insertionLossDb()}.
+     * (textbook magnetic wave impedance at r = d), to show beside {@link #shieldingEffectivenessDb()}.
      *
      * @return the planar result, with its absorption, reflection and B parts
      */
@@ -126,7 +118,7 @@ public final class CouplingResult {
      * @return SE_planar − IL
      */
     public double planarEstimateErrorDb() {
-        return planar.totalDb() - lossDb;
+        return planar.shieldingEffectivenessDb() - lossDb;
     }
 
     /**
@@ -163,6 +155,6 @@ public final class CouplingResult {
     @Override
     public String toString() {
         return String.format(Locale.ROOT, "IL %.2f dB at %s (M free %.6g H; planar estimate %.2f dB)", lossDb,
-                frequency, freeSpace, planar.totalDb());
+                frequency, freeSpace, planar.shieldingEffectivenessDb());
     }
 }

@@ -11,7 +11,7 @@
  * <pre>{@code
  * CoilPair pair = CoilPair.coaxial(Coil.loop(mm(15), 20), Coil.loop(mm(15), 20), mm(30));
  * CouplingResult r = pair.through(Barrier.of(copper, mm(0.5))).at(kHz(10));
- * r.insertionLossDb();
+ * r.shieldingEffectivenessDb();
  * }</pre>
  */
 package io.shieldmath.shield.coupling;

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.design;
 
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.internal.Require;
@@ -39,7 +40,7 @@ public final class BandSearch {
      * @param band  the band, not null
      * @return the worst point
      */
-    public static WorstCase worst(ShieldingModel model, FrequencyBand band) {
+    public static WorstCase worst(ShieldingModel<?> model, FrequencyBand band) {
         Require.nonNull("band", band);
         double decades = Math.log10(band.high().toHertz() / band.low().toHertz());
         int points = Math.max(16, (int) Math.ceil(decades * DEFAULT_POINTS_PER_DECADE) + 1);
@@ -54,7 +55,7 @@ public final class BandSearch {
      * @param points the number of log-spaced sweep points before refinement, 2 or more
      * @return the worst point
      */
-    public static WorstCase worst(ShieldingModel model, FrequencyBand band, int points) {
+    public static WorstCase worst(ShieldingModel<?> model, FrequencyBand band, int points) {
         Require.nonNull("model", model);
         Require.nonNull("band", band);
         if (points < 2) {

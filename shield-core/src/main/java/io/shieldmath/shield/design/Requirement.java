@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.design;
 
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
@@ -21,7 +22,7 @@ import java.util.Locale;
  * Requirement need = Requirement.none()
  *     .plus(FrequencyBand.at(Hz(50)), uT(40), nT(10))
  *     .plus(FrequencyBand.at(kHz(20)), uT(3), nT(200));
- * MarginReport m = need.marginOf(ShieldingModel.of(barrier.facing(field)));
+ * MarginReport m = need.marginOf(barrier.facing(field));
  * }</pre>
  *
  * <p>Fields in air convert between H and B with B = µ0·H. Immutable and thread-safe;
@@ -94,7 +95,7 @@ public final class Requirement {
      * @return the margins, with the worst named
      * @throws IllegalStateException if the requirement has no entries
      */
-    public MarginReport marginOf(ShieldingModel model) {
+    public MarginReport marginOf(ShieldingModel<?> model) {
         Require.nonNull("model", model);
         if (entries.isEmpty()) {
             throw new IllegalStateException("the requirement has no entries; add bands with plus(...)");

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.design;
 
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.quantity.FrequencyBand;
@@ -57,8 +58,7 @@ public final class ThicknessSolver {
                     + barrier.layerCount() + " layers");
         }
         var base = barrier.layers().get(layer);
-        return minimumThickness(t -> ShieldingModel.of(
-                barrier.withLayer(layer, base.withThickness(Length.ofMetres(t))).facing(field)),
+        return minimumThickness(t -> barrier.withLayer(layer, base.withThickness(Length.ofMetres(t))).facing(field),
                 band, targetDb, Length.ofMetres(SMALLEST_METRES), limit);
     }
 
@@ -72,7 +72,7 @@ public final class ThicknessSolver {
      * @param limit            the thickest wall allowed, not below {@code smallest}
      * @return the solution
      */
-    public static ThicknessSolution minimumThickness(DoubleFunction<ShieldingModel> modelOfThickness,
+    public static ThicknessSolution minimumThickness(DoubleFunction<? extends ShieldingModel<?>> modelOfThickness,
                                                      FrequencyBand band, double targetDb, Length smallest,
                                                      Length limit) {
         Require.nonNull("model of thickness", modelOfThickness);

@@ -78,9 +78,9 @@ public final class TwoLayerAdvice {
             peakBehind = Math.max(peakBehind, b0 / Math.max(1, sc) * d / t);
         }
         Option a = new Option("conductor facing the source", conductorFirst,
-                requirement.marginOf(ShieldingModel.of(conductorFirst.facing(field))), peakBehind, peakBehind / bSat);
+                requirement.marginOf(conductorFirst.facing(field)), peakBehind, peakBehind / bSat);
         Option b = new Option("high-µ layer facing the source", magneticFirst,
-                requirement.marginOf(ShieldingModel.of(magneticFirst.facing(field))), peakFacing, peakFacing / bSat);
+                requirement.marginOf(magneticFirst.facing(field)), peakFacing, peakFacing / bSat);
         return new Advice(a, b);
     }
 

@@ -17,7 +17,7 @@ import java.util.List;
  *         .withOpening(Opening.holes(mm(4), 120).named("vent"))
  *         .withOpening(Opening.seam(cm(8)).named("lid seam"));
  * EnclosureResult r = box.facing(IncidentField.planeWave()).at(MHz(300));
- * r.totalDb();       // SE of the enclosure
+ * r.shieldingEffectivenessDb();       // SE of the enclosure
  * r.limitingPath();  // the path that lets most field in
  * }</pre>
  *
@@ -123,7 +123,7 @@ public final class Enclosure {
      * @return the evaluation
      */
     public EnclosureEvaluation facing(IncidentField field) {
-        return new EnclosureEvaluation(this, Require.nonNull("field", field));
+        return EnclosureEvaluation.facing(this, Require.nonNull("field", field));
     }
 
     /**
@@ -132,7 +132,7 @@ public final class Enclosure {
      * @return the evaluation
      */
     public EnclosureEvaluation inUniformField() {
-        return new EnclosureEvaluation(this, null);
+        return EnclosureEvaluation.inUniformField(this);
     }
 
     /**
@@ -142,7 +142,7 @@ public final class Enclosure {
      * @return the result
      */
     public EnclosureResult staticShielding() {
-        return EnclosureEvaluation.combine(this, null, shell.staticShielding().totalDb(), "static shell, exact",
+        return EnclosureEvaluation.combine(this, null, shell.staticShielding().shieldingEffectivenessDb(), "static shell, exact",
                 0, false);
     }
 

@@ -4,11 +4,14 @@
 package io.shieldmath.shield.enclosure;
 
 import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.model.ShieldingModel;
+import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * An enclosure in a field, ready to evaluate at frequencies: facing an incident wave
@@ -17,14 +20,48 @@ import java.util.List;
  *
  * <p>Immutable and thread-safe.
  */
-public final class EnclosureEvaluation {
+public final class EnclosureEvaluation implements ShieldingModel<EnclosureResult> {
+
+    private static final FrequencyBand UNIFORM_FIELD_BAND =
+            FrequencyBand.of(Frequency.ofHertz(Shell.MIN_HERTZ), Frequency.ofHertz(Shell.MAX_HERTZ));
+    private static final FrequencyBand WAVE_BAND =
+            FrequencyBand.of(Frequency.ofHertz(PlanarEvaluation.MIN_HERTZ), Frequency.ofHertz(PlanarEvaluation.MAX_HERTZ));
 
     private final Enclosure enclosure;
-    private final IncidentField field;
+    /** The incident wave, or empty in a uniform magnetic field. */
+    private final Optional<IncidentField> wave;
 
-    EnclosureEvaluation(Enclosure enclosure, IncidentField field) {
+    private EnclosureEvaluation(Enclosure enclosure, Optional<IncidentField> wave) {
         this.enclosure = enclosure;
-        this.field = field;
+        this.wave = wave;
+    }
+
+    static EnclosureEvaluation facing(Enclosure enclosure, IncidentField field) {
+        return new EnclosureEvaluation(enclosure, Optional.of(field));
+    }
+
+    static EnclosureEvaluation inUniformField(Enclosure enclosure) {
+        return new EnclosureEvaluation(enclosure, Optional.empty());
+    }
+
+    /**
+     * The incident wave this enclosure faces, or empty in a uniform magnetic field.
+     *
+     * @return the field, if any
+     */
+    public Optional<IncidentField> incidentField() {
+        return wave;
+    }
+
+    /**
+     * The frequencies this model evaluates: 1 µHz to 100 GHz in a uniform field (the
+     * shell model), 1 µHz to 10 THz facing a wave (the planar wall).
+     *
+     * @return the valid band
+     */
+    @Override
+    public FrequencyBand validBand() {
+        return wave.isPresent() ? WAVE_BAND : UNIFORM_FIELD_BAND;
     }
 
     /**
@@ -43,30 +80,32 @@ public final class EnclosureEvaluation {
      * @return the result
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is out of range
      */
+    @Override
     public EnclosureResult at(Frequency frequency) {
         Require.nonNull("frequency", frequency);
-        if (field == null) {
+        if (wave.isEmpty()) {
             ShellResult wall = enclosure.shell().at(frequency);
-            return combine(enclosure, frequency, wall.totalDb(), "shell in a uniform field", frequency.toHertz(), false);
+            return combine(enclosure, frequency, wall.shieldingEffectivenessDb(), "shell in a uniform field",
+                    frequency.toHertz(), false);
         }
-        double wallDb = enclosure.shell().toBarrier().facing(field).at(frequency).totalDb();
+        IncidentField field = wave.get();
+        double wallDb = enclosure.shell().toBarrier().facing(field).at(frequency).shieldingEffectivenessDb();
         return combine(enclosure, frequency, wallDb, "planar wall facing " + field, frequency.toHertz(), true);
     }
 
     /**
-     * The results at log-spaced frequencies across a band, both ends included.
+     * The shielding effectiveness of the enclosure, all paths summed, at one frequency. This
+     * model builds its leakage paths per call (it is not on primitives like the planar one).
      *
-     * @param band   the band, not null
-     * @param points the number of points, 1 or more
-     * @return the results in increasing frequency, unmodifiable
+     * @param hertz the frequency in Hz, within {@link #validBand()}
+     * @return SE in dB, 0 or more
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is out of range
      */
-    public List<EnclosureResult> sweep(FrequencyBand band, int points) {
-        double[] hz = Require.nonNull("band", band).logSpacedHertz(points);
-        List<EnclosureResult> out = new ArrayList<>(hz.length);
-        for (double f : hz) {
-            out.add(at(Frequency.ofHertz(f)));
-        }
-        return List.copyOf(out);
+    @Override
+    public double shieldingEffectivenessDb(double hertz) {
+        FrequencyBand b = validBand();
+        Require.inRange("frequency", hertz, b.low().toHertz(), b.high().toHertz(), "Hz");
+        return at(Frequency.ofHertz(hertz)).shieldingEffectivenessDb();
     }
 
     /**
@@ -120,6 +159,6 @@ public final class EnclosureEvaluation {
 
     @Override
     public String toString() {
-        return enclosure + (field == null ? " in a uniform magnetic field" : " facing " + field);
+        return enclosure + wave.map(f -> " facing " + f).orElse(" in a uniform magnetic field");
     }
 }

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.Frequency;
 import java.util.List;
@@ -14,7 +15,7 @@ import java.util.Optional;
  *
  * <p>Immutable and thread-safe.
  */
-public final class EnclosureResult {
+public final class EnclosureResult implements ShieldingResult {
 
     private final Frequency frequency;
     private final PathSum sum;
@@ -52,7 +53,8 @@ public final class EnclosureResult {
      *
      * @return SE in dB, 0 or more
      */
-    public double totalDb() {
+    @Override
+    public double shieldingEffectivenessDb() {
         return totalDb;
     }
 
@@ -61,6 +63,7 @@ public final class EnclosureResult {
      *
      * @return SE
      */
+    @Override
     public Decibels shieldingEffectiveness() {
         return Decibels.of(totalDb);
     }

@@ -3,10 +3,10 @@
  */
 package io.shieldmath.shield.enclosure;
 
-import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
@@ -41,7 +41,7 @@ import java.util.List;
  * <p>At most {@value #MAX_WALLS} walls. Immutable and thread-safe; {@code then…} return a
  * new shell and leave this one untouched.
  */
-public final class Shell {
+public final class Shell implements ShieldingModel<ShellResult> {
 
     /** The largest number of walls. */
     public static final int MAX_WALLS = 8;
@@ -49,6 +49,8 @@ public final class Shell {
     public static final double MIN_HERTZ = 1e-6;
     /** The highest frequency evaluated, in Hz (the model is quasi-static; see {@link ShellResult#warnings()}). */
     public static final double MAX_HERTZ = 1e11;
+
+    private static final FrequencyBand VALID = FrequencyBand.of(Frequency.ofHertz(MIN_HERTZ), Frequency.ofHertz(MAX_HERTZ));
 
     private final ShellShape shape;
     private final List<Layer> layers;
@@ -78,7 +80,7 @@ public final class Shell {
             inner[i] = r;
             r += l.thickness().toMetres();
             outer[i] = r;
-            boolean isGap = l.medium() == Medium.AIR;
+            boolean isGap = l.isGap();
             sigma[i] = Require.inRange("wall " + (w.size() + 1) + " conductivity",
                     l.medium().conductivity().toSiemensPerMetre(), 0, 1e10, "S/m");
             mu[i] = isGap ? null : l.medium().permeability();
@@ -245,37 +247,30 @@ public final class Shell {
     }
 
     /**
+     * The frequencies this model evaluates: 1 µHz to 100 GHz (quasi-static; see
+     * {@link ShellResult#warnings()}).
+     *
+     * @return the valid band
+     */
+    @Override
+    public FrequencyBand validBand() {
+        return VALID;
+    }
+
+    /**
      * The shielding in an alternating uniform field at one frequency.
      *
      * @param frequency the frequency, from 1 µHz to 100 GHz
      * @return the result
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is out of range
      */
+    @Override
     public ShellResult at(Frequency frequency) {
         double hz = checkHertz("frequency", Require.nonNull("frequency", frequency).toHertz());
         double[] phase = new double[1];
         double logS = RadialChain.logShielding(geometryCode, inner, outer, sigma, mu, hz, false, phase, null);
         requireFinite(logS, hz);
         return new ShellResult(this, frequency, logS, phase[0]);
-    }
-
-    /**
-     * The results at log-spaced frequencies across a band, both ends included.
-     *
-     * @param band   the band, not null, within 1 µHz to 100 GHz
-     * @param points the number of points, 1 or more
-     * @return the sweep
-     */
-    public ShellSweep sweep(FrequencyBand band, int points) {
-        Require.nonNull("band", band);
-        checkHertz("band lower frequency", band.low().toHertz());
-        checkHertz("band upper frequency", band.high().toHertz());
-        double[] hz = band.logSpacedHertz(points);
-        List<ShellResult> results = new ArrayList<>(points);
-        for (double f : hz) {
-            results.add(at(Frequency.ofHertz(f)));
-        }
-        return new ShellSweep(results);
     }
 
     /**
@@ -286,6 +281,7 @@ public final class Shell {
      * @return 20·log10|S|
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is out of range
      */
+    @Override
     public double shieldingEffectivenessDb(double hertz) {
         double hz = checkHertz("frequency", hertz);
         double logS = RadialChain.logShielding(geometryCode, inner, outer, sigma, mu, hz, false, null, null);

@@ -3,15 +3,14 @@
  */
 package io.shieldmath.shield.enclosure;
 
-import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.PhysicalConstants;
 import io.shieldmath.shield.quantity.RelativePermeability;
-import io.shieldmath.shield.quantity.ShieldingFactor;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.apache.commons.math3.complex.Complex;
+import io.shieldmath.shield.quantity.Complex;
 
 /**
  * The shielding of a shell in a uniform alternating field at one frequency: the complex
@@ -21,7 +20,7 @@ import org.apache.commons.math3.complex.Complex;
  *
  * <p>Immutable and thread-safe.
  */
-public final class ShellResult {
+public final class ShellResult implements ShieldingResult {
 
     /** Above this k0·R (free-space wavenumber times outer radius) the quasi-static model is flagged. */
     public static final double QUASI_STATIC_LIMIT = 0.1;
@@ -61,39 +60,21 @@ public final class ShellResult {
      *
      * @return SE in dB
      */
-    public double totalDb() {
+    @Override
+    public double shieldingEffectivenessDb() {
         return StaticShielding.DB_PER_NEPER * logS;
     }
 
     /**
-     * |S| in dB.
-     *
-     * @return SE
-     */
-    public Decibels shieldingEffectiveness() {
-        return Decibels.of(totalDb());
-    }
-
-    /**
-     * The magnitude |S|.
-     *
-     * @return |S|
-     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if |S| does not fit a double (above about
-     *                                  6160 dB; use {@link #totalDb()})
-     */
-    public ShieldingFactor magnitude() {
-        return ShieldingFactor.from(shieldingEffectiveness());
-    }
-
-    /**
-     * The complex shielding factor S. Its magnitude overflows to infinity above about
-     * 6160 dB; use {@link #totalDb()} and {@link #phase()} there.
+     * The complex shielding factor S (applied field over the field at the centre); its
+     * magnitude is {@link #shieldingFactor()}.
      *
      * @return S
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if |S| does not fit a double
+     *         (above about 6160 dB; use {@link #shieldingEffectivenessDb()} and {@link #phase()} there)
      */
-    public Complex shieldingFactor() {
-        double m = Math.exp(logS);
-        return new Complex(m * Math.cos(phase), m * Math.sin(phase));
+    public Complex complexShieldingFactor() {
+        return Complex.ofPolar(Math.exp(logS), phase);
     }
 
     /**
@@ -110,12 +91,14 @@ public final class ShellResult {
      * with that wall's µr at this frequency.
      *
      * @param wall the wall's index, 0 for the innermost
-     * @return S of that wall by the thin-shell formula (infinite above about 6160 dB; see
-     *         {@link #thinShellDb(int)})
+     * @return S of that wall by the thin-shell formula
      * @throws IndexOutOfBoundsException if there is no such wall
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if |S| does not fit a double
+     *         (above about 6160 dB; use {@link #thinShellDb(int)} there)
      */
     public Complex thinShellFactor(int wall) {
-        return logThin(wall).exp();
+        org.apache.commons.math3.complex.Complex log = logThin(wall);
+        return Complex.ofPolar(Math.exp(log.getReal()), log.getImaginary());
     }
 
     /**
@@ -129,10 +112,10 @@ public final class ShellResult {
         return StaticShielding.DB_PER_NEPER * logThin(wall).getReal();
     }
 
-    private Complex logThin(int wall) {
+    private org.apache.commons.math3.complex.Complex logThin(int wall) {
         Wall w = shell.walls().get(wall);
         RelativePermeability mu = w.medium().permeabilityAt(frequency);
-        return Kaden.logFactor(shell.geometry(), new Complex(mu.real(), -mu.loss()),
+        return Kaden.logFactor(shell.geometry(), new org.apache.commons.math3.complex.Complex(mu.real(), -mu.loss()),
                 w.medium().conductivity().toSiemensPerMetre(), frequency.angular(), w.meanMetres(),
                 w.thicknessMetres());
     }
@@ -166,6 +149,6 @@ public final class ShellResult {
 
     @Override
     public String toString() {
-        return String.format(Locale.ROOT, "|S| %.2f dB, arg S %.3f rad at %s", totalDb(), phase, frequency);
+        return String.format(Locale.ROOT, "|S| %.2f dB, arg S %.3f rad at %s", shieldingEffectivenessDb(), phase, frequency);
     }
 }

@@ -4,6 +4,7 @@
 package io.shieldmath.shield.enclosure;
 
 import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.ShieldingFactor;
 import java.util.List;
@@ -32,7 +33,7 @@ import java.util.Locale;
  *
  * <p>Immutable and thread-safe.
  */
-public final class StaticShielding {
+public final class StaticShielding implements ShieldingResult {
 
     /** Decibels per neper of field amplitude, 20/ln 10. */
     static final double DB_PER_NEPER = 20 / Math.log(10);
@@ -61,6 +62,7 @@ public final class StaticShielding {
      *
      * @return S, 1 or more for walls with µr ≥ 1
      */
+    @Override
     public ShieldingFactor shieldingFactor() {
         return ShieldingFactor.of(factor());
     }
@@ -79,7 +81,8 @@ public final class StaticShielding {
      *
      * @return SE
      */
-    public double totalDb() {
+    @Override
+    public double shieldingEffectivenessDb() {
         return DB_PER_NEPER * logS;
     }
 
@@ -88,8 +91,9 @@ public final class StaticShielding {
      *
      * @return SE
      */
+    @Override
     public Decibels shieldingEffectiveness() {
-        return Decibels.of(totalDb());
+        return Decibels.of(shieldingEffectivenessDb());
     }
 
     /**
@@ -161,6 +165,6 @@ public final class StaticShielding {
     @Override
     public String toString() {
         return String.format(Locale.ROOT, "static S %.4g (%.2f dB); product %.4g, spaced product %.4g", factor(),
-                totalDb(), productFactor(), spacedProductFactor());
+                shieldingEffectivenessDb(), productFactor(), spacedProductFactor());
     }
 }

@@ -8,7 +8,7 @@ import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.PhysicalConstants;
 import io.shieldmath.shield.internal.Require;
 import java.util.Objects;
-import org.apache.commons.math3.complex.Complex;
+import io.shieldmath.shield.quantity.Complex;
 
 /**
  * The field that falls on a barrier, described by its wave impedance Zw = E/H at the
@@ -104,7 +104,7 @@ public final class IncidentField {
      */
     public Complex waveImpedance(Frequency frequency) {
         double f = Require.nonNull("frequency", frequency).toHertz();
-        return new Complex(impedanceReal(f), impedanceImaginary(f));
+        return Complex.ofCartesian(impedanceReal(f), impedanceImaginary(f));
     }
 
     /**

@@ -22,10 +22,12 @@ public final class Layer {
 
     private final Medium medium;
     private final Length thickness;
+    private final boolean gap;
 
-    private Layer(Medium medium, Length thickness) {
+    private Layer(Medium medium, Length thickness, boolean gap) {
         this.medium = medium;
         this.thickness = thickness;
+        this.gap = gap;
     }
 
     /**
@@ -37,20 +39,27 @@ public final class Layer {
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is out of range
      */
     public static Layer of(MediumSource medium, Length thickness) {
+        return make(medium, thickness, false);
+    }
+
+    private static Layer make(MediumSource medium, Length thickness, boolean gap) {
         Medium m = Require.nonNull("medium", Require.nonNull("medium", medium).medium());
         Require.nonNull("thickness", thickness);
         Require.inRange("layer thickness", thickness.toMetres(), 1e-12, 100, "m");
-        return new Layer(m, thickness);
+        return new Layer(m, thickness, gap);
     }
 
     /**
-     * An air gap (treated as free space).
+     * An air gap (treated as free space). A gap is marked as such ({@link #isGap()}), so a
+     * model that treats gaps apart from walls (a shell's spacing between walls, for one)
+     * knows it by the mark, never by which {@code Medium} object it holds.
      *
      * @param thickness the gap, from 1 pm to 100 m
      * @return the layer
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is out of range
      */
     public static Layer gap(Length thickness) {
-        return of(Medium.AIR, thickness);
+        return make(Medium.AIR, thickness, true);
     }
 
     /**
@@ -92,6 +101,16 @@ public final class Layer {
     }
 
     /**
+     * Whether this layer is an air gap made by {@link #gap(Length)} (a layer of any medium
+     * made by {@link #of(MediumSource, Length)} is not, even of air).
+     *
+     * @return true for a gap
+     */
+    public boolean isGap() {
+        return gap;
+    }
+
+    /**
      * The thickness.
      *
      * @return t
@@ -107,17 +126,17 @@ public final class Layer {
      * @return the new layer; this one is unchanged
      */
     public Layer withThickness(Length newThickness) {
-        return of(medium, newThickness);
+        return make(medium, newThickness, gap);
     }
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof Layer l && l.medium.equals(medium) && l.thickness.equals(thickness);
+        return o instanceof Layer l && l.gap == gap && l.medium.equals(medium) && l.thickness.equals(thickness);
     }
 
     @Override
     public int hashCode() {
-        return medium.hashCode() * 31 + thickness.hashCode();
+        return (medium.hashCode() * 31 + thickness.hashCode()) * 2 + (gap ? 1 : 0);
     }
 
     @Override

@@ -4,12 +4,11 @@
 package io.shieldmath.shield.planar;
 
 import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.internal.Require;
-import java.util.ArrayList;
-import java.util.List;
 
 /**
  * A barrier facing an incident field: evaluate it at one frequency, over a sweep, or in
@@ -28,12 +27,14 @@ import java.util.List;
  * <p>Immutable and thread-safe; the batch methods allocate nothing per point and may be
  * called from many threads on the same object.
  */
-public final class PlanarEvaluation {
+public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
 
     /** The lowest frequency evaluated, in Hz. */
     public static final double MIN_HERTZ = 1e-6;
     /** The highest frequency evaluated, in Hz. */
     public static final double MAX_HERTZ = 1e13;
+
+    private static final FrequencyBand VALID = FrequencyBand.of(Frequency.ofHertz(MIN_HERTZ), Frequency.ofHertz(MAX_HERTZ));
 
     private final Barrier barrier;
     private final IncidentField field;
@@ -62,12 +63,23 @@ public final class PlanarEvaluation {
     }
 
     /**
+     * The frequencies this model evaluates: 1 µHz to 10 THz.
+     *
+     * @return the valid band
+     */
+    @Override
+    public FrequencyBand validBand() {
+        return VALID;
+    }
+
+    /**
      * The full result at one frequency: total SE, transmission coefficient and parts.
      *
      * @param frequency the frequency, from 1 µHz to 10 THz
      * @return the result
      * @throws InvalidQuantityException if the frequency is out of range
      */
+    @Override
     public PlanarResult at(Frequency frequency) {
         double hz = checkHertz("frequency", Require.nonNull("frequency", frequency).toHertz());
         return evaluate(frequency, hz);
@@ -88,31 +100,13 @@ public final class PlanarEvaluation {
     }
 
     /**
-     * The results at log-spaced frequencies across a band, both ends included.
-     *
-     * @param band   the band, not null, within 1 µHz to 10 THz
-     * @param points the number of points, 1 or more
-     * @return the sweep
-     */
-    public PlanarSweep sweep(FrequencyBand band, int points) {
-        Require.nonNull("band", band);
-        checkHertz("band lower frequency", band.low().toHertz());
-        checkHertz("band upper frequency", band.high().toHertz());
-        double[] hz = band.logSpacedHertz(points);
-        List<PlanarResult> results = new ArrayList<>(points);
-        for (double f : hz) {
-            results.add(evaluate(Frequency.ofHertz(f), f));
-        }
-        return new PlanarSweep(results);
-    }
-
-    /**
      * The total shielding effectiveness at one frequency, in dB, without creating objects.
      *
      * @param hertz the frequency in Hz, from 1 µHz to 10 THz
      * @return SE in dB
      * @throws InvalidQuantityException if the frequency is out of range
      */
+    @Override
     public double shieldingEffectivenessDb(double hertz) {
         return seDb(checkHertz("frequency", hertz));
     }
@@ -128,6 +122,7 @@ public final class PlanarEvaluation {
      *                                  is written from that index on
      * @throws IllegalArgumentException if {@code outDb} is too short
      */
+    @Override
     public double[] shieldingEffectivenessDb(double[] hertz, double[] outDb) {
         Require.nonNull("frequencies", hertz);
         Require.nonNull("output array", outDb);

@@ -4,11 +4,10 @@
 package io.shieldmath.shield.planar;
 
 import io.shieldmath.shield.field.IncidentField;
-import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.quantity.Complex;
 import io.shieldmath.shield.quantity.Frequency;
-import io.shieldmath.shield.quantity.ShieldingFactor;
 import java.util.Locale;
-import org.apache.commons.math3.complex.Complex;
 
 /**
  * The shielding effectiveness of a planar barrier at one frequency, with its parts.
@@ -28,7 +27,7 @@ import org.apache.commons.math3.complex.Complex;
  *
  * <p>Immutable and thread-safe.
  */
-public final class PlanarResult {
+public final class PlanarResult implements ShieldingResult {
 
     private final Frequency frequency;
     private final IncidentField field;
@@ -74,32 +73,13 @@ public final class PlanarResult {
     }
 
     /**
-     * The total shielding effectiveness in dB.
+     * The total shielding effectiveness in dB, A + R + B.
      *
      * @return SE, finite
      */
-    public double totalDb() {
+    @Override
+    public double shieldingEffectivenessDb() {
         return totalDb;
-    }
-
-    /**
-     * The total shielding effectiveness.
-     *
-     * @return SE
-     */
-    public Decibels shieldingEffectiveness() {
-        return Decibels.of(totalDb);
-    }
-
-    /**
-     * The shielding factor 10^(SE/20).
-     *
-     * @return S
-     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if SE is above about 6160 dB,
-     *                                  where S does not fit a double (use {@link #totalDb()})
-     */
-    public ShieldingFactor shieldingFactor() {
-        return ShieldingFactor.from(shieldingEffectiveness());
     }
 
     /**
@@ -177,7 +157,7 @@ public final class PlanarResult {
      */
     public Complex transmission() {
         double m = Math.exp(logT);
-        return new Complex(m * Math.cos(phase), m * Math.sin(phase));
+        return Complex.ofPolar(m, phase);
     }
 
     @Override

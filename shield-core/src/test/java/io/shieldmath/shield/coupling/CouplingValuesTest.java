@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.model.Sweep;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -167,32 +168,32 @@ class CouplingValuesTest {
         double[] f = {100, 1e4, 1e6};
         double[] out = new double[4];
         out[3] = -1;
-        assertSame(out, e.insertionLossDb(f, out));
-        List<CouplingResult> sweep = e.sweep(FrequencyBand.parse("100 Hz to 1 MHz"), 3);
+        assertSame(out, e.shieldingEffectivenessDb(f, out));
+        Sweep<CouplingResult> sweep = e.sweep(FrequencyBand.parse("100 Hz to 1 MHz"), 3);
         assertEquals(3, sweep.size());
         for (int i = 0; i < 3; i++) {
-            double single = e.insertionLossDb(f[i]);
+            double single = e.shieldingEffectivenessDb(f[i]);
             assertEquals(single, out[i], 0);
-            assertEquals(single, e.at(Frequency.ofHertz(f[i])).insertionLossDb(), 0);
-            assertEquals(single, sweep.get(i).insertionLossDb(), 1e-9);
+            assertEquals(single, e.at(Frequency.ofHertz(f[i])).shieldingEffectivenessDb(), 0);
+            assertEquals(single, sweep.get(i).shieldingEffectivenessDb(), 1e-9);
             assertEquals(f[i], sweep.get(i).frequency().toHertz(), 1e-9);
         }
         assertEquals(-1, out[3], 0);
         assertTrue(out[2] > out[0], "copper shields more at higher frequency");
         assertEquals("output array holds 2 values but 3 frequencies were given",
-                assertThrows(IllegalArgumentException.class, () -> e.insertionLossDb(f, new double[2])).getMessage());
+                assertThrows(IllegalArgumentException.class, () -> e.shieldingEffectivenessDb(f, new double[2])).getMessage());
         // The frequency range 1 mHz to 1 GHz is closed at both ends.
-        e.insertionLossDb(CouplingEvaluation.MIN_HERTZ);
-        e.insertionLossDb(CouplingEvaluation.MAX_HERTZ);
-        assertThrows(InvalidQuantityException.class, () -> e.insertionLossDb(Math.nextUp(CouplingEvaluation.MAX_HERTZ)));
+        e.shieldingEffectivenessDb(CouplingEvaluation.MIN_HERTZ);
+        e.shieldingEffectivenessDb(CouplingEvaluation.MAX_HERTZ);
+        assertThrows(InvalidQuantityException.class, () -> e.shieldingEffectivenessDb(Math.nextUp(CouplingEvaluation.MAX_HERTZ)));
         assertThrows(InvalidQuantityException.class,
-                () -> e.insertionLossDb(new double[] {1, 0.5e-3}, new double[2]));
+                () -> e.shieldingEffectivenessDb(new double[] {1, 0.5e-3}, new double[2]));
         assertThrows(InvalidQuantityException.class, () -> e.at(Frequency.ofGigahertz(2)));
         assertThrows(InvalidQuantityException.class, () -> e.sweep(FrequencyBand.parse("0.1 mHz to 1 Hz"), 2));
         assertThrows(InvalidQuantityException.class, () -> e.sweep(FrequencyBand.parse("1 Hz to 2 GHz"), 2));
         assertThrows(NullPointerException.class, () -> e.sweep(null, 2));
-        assertThrows(NullPointerException.class, () -> e.insertionLossDb(null, out));
-        assertThrows(NullPointerException.class, () -> e.insertionLossDb(f, null));
+        assertThrows(NullPointerException.class, () -> e.shieldingEffectivenessDb(null, out));
+        assertThrows(NullPointerException.class, () -> e.shieldingEffectivenessDb(f, null));
         assertThrows(NullPointerException.class, () -> e.at(null));
         // log|x + jy| helper: |3 + 4j| = 5; 0 gives −∞.
         assertEquals(Math.log(5), CouplingEvaluation.logAbs(3, 4), 1e-15);
@@ -204,17 +205,17 @@ class CouplingValuesTest {
     void resultsGiveTheMutualImpedanceAndInducedVoltages() {
         Frequency f = Frequency.ofKilohertz(5);
         CouplingResult r = CouplingPhysicsTest.SMALL.through(Barrier.of(COPPER, Length.ofMillimetres(0.3))).at(f);
-        Complex m = r.shieldedMutualInductance();
+        Complex m = io.shieldmath.shield.TestComplex.cm(r.shieldedMutualInductance());
         assertTrue(Math.abs(m.getImaginary()) > 1e-3 * m.abs(), "eddy currents shift the phase of M");
         // Z = jωM (e^{jωt} convention, DOMAIN.md §2).
         Complex z = m.multiply(Complex.I).multiply(f.angular());
-        assertEquals(z.getReal(), r.mutualImpedance().getReal(), 1e-12 * z.abs());
-        assertEquals(z.getImaginary(), r.mutualImpedance().getImaginary(), 1e-12 * z.abs());
-        assertEquals(20 * Math.log10(r.freeSpaceMutualInductance() / m.abs()), r.insertionLossDb(), 1e-9);
-        assertEquals(r.insertionLossDb(), r.insertionLoss().toDb(), 0);
+        assertEquals(z.getReal(), r.mutualImpedance().real(), 1e-12 * z.abs());
+        assertEquals(z.getImaginary(), r.mutualImpedance().imaginary(), 1e-12 * z.abs());
+        assertEquals(20 * Math.log10(r.freeSpaceMutualInductance() / m.abs()), r.shieldingEffectivenessDb(), 1e-9);
+        assertEquals(r.shieldingEffectivenessDb(), r.shieldingEffectiveness().toDb(), 0);
         assertEquals(f, r.frequency());
         assertEquals(String.format(java.util.Locale.ROOT, "IL %.2f dB at 5 kHz (M free %.6g H; planar estimate %.2f dB)",
-                r.insertionLossDb(), r.freeSpaceMutualInductance(), r.planarEstimate().totalDb()), r.toString());
+                r.shieldingEffectivenessDb(), r.freeSpaceMutualInductance(), r.planarEstimate().shieldingEffectivenessDb()), r.toString());
         // The drive must be at the result's frequency.
         DriveCurrent other = DriveCurrent.ofAmperes(1, AmplitudeMeasure.PEAK, Frequency.ofKilohertz(6));
         assertEquals("the drive current is at 6 kHz but this result is at 5 kHz",
@@ -323,6 +324,6 @@ class CouplingValuesTest {
         // From a model result: the model value is its insertion loss.
         CouplingResult r = CouplingPhysicsTest.SMALL.through(Barrier.of(COPPER, Length.ofMillimetres(0.1)))
                 .at(Frequency.ofKilohertz(1));
-        assertEquals(r.insertionLossDb(), BenchComparison.of(open, covered, r).modelDb(), 0);
+        assertEquals(r.shieldingEffectivenessDb(), BenchComparison.of(open, covered, r).modelDb(), 0);
     }
 }

@@ -22,8 +22,8 @@ class ReadmeExampleTest {
         CoilPair pair = CoilPair.coaxial(Coil.loop(mm(10), 25), Coil.loop(mm(10), 25), mm(40));
         CouplingResult r = pair.through(Barrier.of(copper, mm(0.5))).at(kHz(10));
         // Common practice, no source: well over 10 dB at 10 kHz; the textbook planar estimate is higher.
-        assertTrue(r.insertionLossDb() > 15);
-        assertTrue(r.planarEstimate().totalDb() > r.insertionLossDb());
+        assertTrue(r.shieldingEffectivenessDb() > 15);
+        assertTrue(r.planarEstimate().shieldingEffectivenessDb() > r.shieldingEffectivenessDb());
         double mv = r.inducedVoltage(DriveCurrent.ofMilliamperes(100, AmplitudeMeasure.RMS, kHz(10)))
                 .millivolts(AmplitudeMeasure.PEAK_TO_PEAK);
         assertEquals(2 * Math.PI * 1e4 * r.shieldedMutualInductance().abs() * 0.1 * Math.sqrt(2) * 2 * 1e3, mv,

@@ -3,6 +3,8 @@
  */
 package io.shieldmath.shield.design;
 
+import io.shieldmath.shield.model.ShieldingModel;
+import io.shieldmath.shield.planar.PlanarResult;
 import static io.shieldmath.shield.quantity.Quantities.GHz;
 import static io.shieldmath.shield.quantity.Quantities.Hz;
 import static io.shieldmath.shield.quantity.Quantities.MHz;
@@ -50,8 +52,8 @@ class DesignTest {
                 .plus(FrequencyBand.at(Hz(50)), uT(40), nT(10))
                 .plus(FrequencyBand.of(kHz(15), kHz(25)), uT(3), nT(200));
         Barrier plate = Barrier.of(COPPER, mm(1));
-        MarginReport m = need.marginOf(ShieldingModel.of(plate.facing(
-                IncidentField.magneticNearField(cm(6), ImpedanceForm.TEXTBOOK))));
+        MarginReport m = need.marginOf(plate.facing(
+                IncidentField.magneticNearField(cm(6), ImpedanceForm.TEXTBOOK)));
         // Copper is nearly transparent at 50 Hz, so the 50 Hz band limits (common practice, no source).
         assertEquals(Hz(50), m.worst().frequency());
         assertFalse(m.meets());
@@ -82,10 +84,10 @@ class DesignTest {
             ThicknessSolution s = ThicknessSolver.minimumThickness(b, 2, near, band, target, mm(20));
             assertTrue(s.isFound(), s::explanation);
             Length t = s.thickness();
-            double at = BandSearch.worst(ShieldingModel.of(b.withLayer(2, b.layers().get(2).withThickness(t))
-                    .facing(near)), band).seDb();
-            double below = BandSearch.worst(ShieldingModel.of(b.withLayer(2, b.layers().get(2)
-                    .withThickness(t.multipliedBy(1 - 1e-4))).facing(near)), band).seDb();
+            double at = BandSearch.worst(b.withLayer(2, b.layers().get(2).withThickness(t))
+                    .facing(near), band).seDb();
+            double below = BandSearch.worst(b.withLayer(2, b.layers().get(2)
+                    .withThickness(t.multipliedBy(1 - 1e-4))).facing(near), band).seDb();
             assertTrue(at >= target && at < target + 0.01, () -> target + ": " + at);
             assertTrue(below < target, () -> target + " below: " + below);
         }
@@ -140,7 +142,7 @@ class DesignTest {
         // SE dips sharply (the film-spacer-film resonance, common practice, no source).
         Barrier b = Barrier.of(Layer.film(SheetResistance.ofOhmsPerSquare(0.05))).thenGap(cm(10))
                 .then(Layer.film(SheetResistance.ofOhmsPerSquare(0.05)));
-        ShieldingModel model = ShieldingModel.of(b.facing(PLANE));
+        ShieldingModel<PlanarResult> model = b.facing(PLANE);
         FrequencyBand band = FrequencyBand.of(MHz(100), GHz(10));
         double bruteMin = Double.POSITIVE_INFINITY;
         for (double f : band.logSpacedHertz(200_000)) {

@@ -33,6 +33,14 @@ import org.junit.jupiter.api.Test;
  */
 class DesignValuesTest {
 
+    /** A model given by a function, for the tools' edge cases (not physics). */
+    private static io.shieldmath.shield.model.ShieldingModel<io.shieldmath.shield.model.ShieldingResult> fn(
+            java.util.function.DoubleUnaryOperator seDb) {
+        return io.shieldmath.shield.model.ShieldingModel.ofFunction("test function",
+                FrequencyBand.of(Frequency.ofHertz(1e-6), Frequency.ofHertz(1e13)), seDb);
+    }
+
+
     private static final Medium COPPER = Medium.conductor("copper", Conductivity.ofPercentIacs(100), 1);  // IEC 60028
     private static final Medium ALLOY = Medium.conductor("alloy", Conductivity.ofMegasiemensPerMetre(1.7),
             PermeabilityModel.relaxation(30_000, Frequency.ofKilohertz(1)));                              // demo
@@ -149,13 +157,13 @@ class DesignValuesTest {
                 byB.toString());
         assertEquals(List.of(), Requirement.none().entries());
         assertEquals("the requirement has no entries; add bands with plus(...)", assertThrows(
-                IllegalStateException.class, () -> Requirement.none().marginOf(f -> 0)).getMessage());
+                IllegalStateException.class, () -> Requirement.none().marginOf(fn(f -> 0))).getMessage());
         assertThrows(InvalidQuantityException.class, () -> Requirement.none().plus(BAND, MagneticFluxDensity.ofTesla(0),
                 MagneticFluxDensity.ofTesla(1)));
         assertThrows(InvalidQuantityException.class, () -> Requirement.none().plus(BAND, MagneticFluxDensity.ofTesla(1),
                 MagneticFluxDensity.ofTesla(0)));
         // Margin of a flat 45 dB model against 40 dB required: +5 dB everywhere.
-        MarginReport flat = byB.marginOf(f -> 45);
+        MarginReport flat = byB.marginOf(fn(f -> 45));
         assertEquals(5, flat.worstMarginDb(), 1e-12);
         assertTrue(flat.meets());
     }
@@ -163,27 +171,27 @@ class DesignValuesTest {
     @Test
     void bandSearchEdges() {
         // A single-frequency band evaluates that frequency once.
-        BandSearch.WorstCase one = BandSearch.worst(f -> f / 10, FrequencyBand.at(Frequency.ofHertz(70)));
+        BandSearch.WorstCase one = BandSearch.worst(fn(f -> f / 10), FrequencyBand.at(Frequency.ofHertz(70)));
         assertEquals(7, one.seDb(), 0);
         assertEquals(Frequency.ofHertz(70), one.frequency());
         assertEquals("7.00 dB at 70 Hz", one.toString());
         // A monotone model: the worst point is an end of the band, exactly.
-        BandSearch.WorstCase rising = BandSearch.worst(f -> Math.log10(f), FrequencyBand.parse("10 Hz to 1 kHz"));
+        BandSearch.WorstCase rising = BandSearch.worst(fn(f -> Math.log10(f)), FrequencyBand.parse("10 Hz to 1 kHz"));
         assertEquals(1, rising.seDb(), 1e-9);
         assertEquals(10, rising.frequency().toHertz(), 1e-6);
-        BandSearch.WorstCase falling = BandSearch.worst(f -> -Math.log10(f), FrequencyBand.parse("10 Hz to 1 kHz"), 2);
+        BandSearch.WorstCase falling = BandSearch.worst(fn(f -> -Math.log10(f)), FrequencyBand.parse("10 Hz to 1 kHz"), 2);
         assertEquals(-3, falling.seDb(), 1e-9);
         assertEquals(1000, falling.frequency().toHertz(), 1e-6);
         // A smooth minimum between grid points is refined: (log10 f − 2.13)² has its minimum at 134.9 Hz.
-        BandSearch.WorstCase dip = BandSearch.worst(f -> Math.pow(Math.log10(f) - 2.13, 2),
+        BandSearch.WorstCase dip = BandSearch.worst(fn(f -> Math.pow(Math.log10(f) - 2.13, 2)),
                 FrequencyBand.parse("10 Hz to 1 kHz"), 5);
         assertEquals(0, dip.seDb(), 1e-9);
         assertEquals(Math.pow(10, 2.13), dip.frequency().toHertz(), 1e-3);
         assertEquals("a band search needs at least 2 points; got 1", assertThrows(IllegalArgumentException.class,
-                () -> BandSearch.worst(f -> 0, BAND, 1)).getMessage());
+                () -> BandSearch.worst(fn(f -> 0), BAND, 1)).getMessage());
         assertThrows(NullPointerException.class, () -> BandSearch.worst(null, BAND, 3));
-        assertThrows(NullPointerException.class, () -> BandSearch.worst(f -> 0, null, 3));
-        assertThrows(NullPointerException.class, () -> BandSearch.worst(f -> 0, null));
+        assertThrows(NullPointerException.class, () -> BandSearch.worst(fn(f -> 0), null, 3));
+        assertThrows(NullPointerException.class, () -> BandSearch.worst(fn(f -> 0), null));
     }
 
     @Test
@@ -263,7 +271,7 @@ class DesignValuesTest {
         assertEquals(5000, s.targetDb(), 0);
         assertEquals(s.explanation(), s.toString());
         assertEquals(s.explanation(), assertThrows(IllegalStateException.class, s::thickness).getMessage());
-        assertEquals(BandSearch.worst(ShieldingModel.of(Barrier.of(COPPER, limit).facing(plane)), band).seDb(),
+        assertEquals(BandSearch.worst(Barrier.of(COPPER, limit).facing(plane), band).seDb(),
                 s.worst().seDb(), 1e-9);
         ThicknessSolution ok = ThicknessSolver.minimumThickness(Barrier.of(COPPER, limit), 0, plane, band, 150, limit);
         assertTrue(ok.isFound());
@@ -275,12 +283,12 @@ class DesignValuesTest {
         assertThrows(IndexOutOfBoundsException.class,
                 () -> ThicknessSolver.minimumThickness(Barrier.of(COPPER, limit), -1, plane, band, 150, limit));
         // Already met at the smallest thickness considered.
-        ThicknessSolution at = ThicknessSolver.minimumThickness(t -> f -> 10, band, 10, Length.ofMicrometres(1),
+        ThicknessSolution at = ThicknessSolver.minimumThickness(t -> fn(f -> 10), band, 10, Length.ofMicrometres(1),
                 limit);
         assertTrue(at.isFound());
         assertEquals(Length.ofMicrometres(1), at.thickness());
         assertEquals("already met at the smallest thickness considered", at.explanation());
-        assertThrows(InvalidQuantityException.class, () -> ThicknessSolver.minimumThickness(t -> f -> 10, band, 10,
+        assertThrows(InvalidQuantityException.class, () -> ThicknessSolver.minimumThickness(t -> fn(f -> 10), band, 10,
                 Length.ofMillimetres(6), limit));
     }
 
@@ -293,7 +301,7 @@ class DesignValuesTest {
         Length limit = Length.ofMicrometres(173);
         FrequencyBand band = FrequencyBand.parse("1 MHz to 10 MHz");
         IncidentField plane = IncidentField.planeWave();
-        double target = BandSearch.worst(ShieldingModel.of(Barrier.of(COPPER, limit).facing(plane)), band).seDb();
+        double target = BandSearch.worst(Barrier.of(COPPER, limit).facing(plane), band).seDb();
         ThicknessSolution s = ThicknessSolver.minimumThickness(Barrier.of(COPPER, limit), 0, plane, band, target,
                 limit);
         assertTrue(s.isFound());
@@ -301,7 +309,7 @@ class DesignValuesTest {
         assertEquals(173e-6, s.thickness().toMetres(), 173e-6 * 1e-6);
         // The same with a model that steps up to the target only at the limit itself.
         Length five = Length.ofMillimetres(5);
-        ThicknessSolution step = ThicknessSolver.minimumThickness(t -> f -> t >= 0.005 ? 10 : 0, band, 10,
+        ThicknessSolution step = ThicknessSolver.minimumThickness(t -> fn(f -> t >= 0.005 ? 10 : 0), band, 10,
                 Length.ofMicrometres(1), five);
         assertTrue(step.isFound());
         assertEquals(0.005, step.thickness().toMetres(), 0);

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.planar;
 
+import io.shieldmath.shield.model.Sweep;
 import static io.shieldmath.shield.quantity.Quantities.GHz;
 import static io.shieldmath.shield.quantity.Quantities.Hz;
 import static io.shieldmath.shield.quantity.Quantities.MHz;
@@ -62,7 +63,7 @@ class PlanarCheckValuesTest {
         // 5 mm copper at 1 MHz: A ≈ 657 dB (DOMAIN §3), finite and accurate.
         PlanarResult thick = Barrier.of(COPPER, mm(5)).facing(PLANE).at(MHz(1));
         assertEquals(657.2, thick.absorptionDb(), 0.1);
-        assertTrue(Double.isFinite(thick.totalDb()));
+        assertTrue(Double.isFinite(thick.shieldingEffectivenessDb()));
     }
 
     @ParameterizedTest
@@ -110,7 +111,7 @@ class PlanarCheckValuesTest {
                 assertEquals(a, r.absorptionDb(), 1e-9 * Math.max(1, a));
                 assertEquals(rr, r.reflectionDb(), 1e-9 * rr);
                 assertEquals(b, r.multipleReflectionDb(), 1e-8);
-                assertEquals(a + rr + b, r.totalDb(), 1e-8);
+                assertEquals(a + rr + b, r.shieldingEffectivenessDb(), 1e-8);
             }
         }
     }
@@ -121,7 +122,7 @@ class PlanarCheckValuesTest {
         for (IncidentField f : fields()) {
             for (double hz : new double[] {1e-3, 50, 1e6, 1e11}) {
                 Medium vacuumLike = Medium.conductor("vacuum-like slab", io.shieldmath.shield.quantity.Conductivity.ZERO, 1);
-                assertEquals(0.0, Barrier.of(vacuumLike, mm(3)).facing(f).at(Frequency.ofHertz(hz)).totalDb(), 0.0);
+                assertEquals(0.0, Barrier.of(vacuumLike, mm(3)).facing(f).at(Frequency.ofHertz(hz)).shieldingEffectivenessDb(), 0.0);
             }
         }
     }
@@ -134,7 +135,7 @@ class PlanarCheckValuesTest {
             IncidentField.magneticNearField(cm(5), ImpedanceForm.TEXTBOOK),
             IncidentField.magneticNearField(cm(5), ImpedanceForm.EXACT_DIPOLE)}) {
             for (double hz : new double[] {1e-3, 1, 1e3, 1e5, 1e6}) {
-                double se = ptfe.facing(f).at(Frequency.ofHertz(hz)).totalDb();
+                double se = ptfe.facing(f).at(Frequency.ofHertz(hz)).shieldingEffectivenessDb();
                 assertTrue(Math.abs(se) < 0.01, () -> f + " " + hz + " Hz: " + se);
             }
         }
@@ -145,7 +146,7 @@ class PlanarCheckValuesTest {
         // For t ≪ δ, plane-wave SE → 20·log10(1 + η0/(2Rs)) (DOMAIN §3; the thin-film formula of
         // R. B. Schulz, V. C. Plantz, D. R. Brush, IEEE Trans. EMC 30 (1988) 187, from memory).
         for (double rs : new double[] {0.01, 1, 100}) {
-            double se = Barrier.of(Layer.film(SheetResistance.ofOhmsPerSquare(rs))).facing(PLANE).at(MHz(1)).totalDb();
+            double se = Barrier.of(Layer.film(SheetResistance.ofOhmsPerSquare(rs))).facing(PLANE).at(MHz(1)).shieldingEffectivenessDb();
             assertEquals(20 * Math.log10(1 + PhysicalConstants.ETA_0 / (2 * rs)), se, 1e-3);
         }
     }
@@ -168,12 +169,12 @@ class PlanarCheckValuesTest {
     void sweepAndBatchAgreeWithSinglePoints() {
         Barrier b = Barrier.of(COPPER, um(35)).thenGap(mm(2)).then(Medium.conductor("steel", iacs(12), 200), mm(0.5));
         PlanarEvaluation e = b.facing(IncidentField.magneticNearField(cm(3), ImpedanceForm.EXACT_DIPOLE));
-        PlanarSweep s = e.sweep(io.shieldmath.shield.quantity.FrequencyBand.of(Hz(10), MHz(10)), 31);
+        Sweep<PlanarResult> s = e.sweep(io.shieldmath.shield.quantity.FrequencyBand.of(Hz(10), MHz(10)), 31);
         double[] batch = e.shieldingEffectivenessDb(s.frequenciesHertz());
         for (int i = 0; i < batch.length; i++) {
-            assertEquals(s.results().get(i).totalDb(), batch[i], 0);
+            assertEquals(s.results().get(i).shieldingEffectivenessDb(), batch[i], 0);
         }
-        assertTrue(s.worst().totalDb() <= batch[batch.length - 1]);
+        assertTrue(s.lowestSampled().shieldingEffectivenessDb() <= batch[batch.length - 1]);
     }
 
     @Test

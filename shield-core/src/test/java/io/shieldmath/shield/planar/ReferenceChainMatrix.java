@@ -24,7 +24,7 @@ final class ReferenceChainMatrix {
     /** T of the barrier between the field's wave impedance on both sides. */
     static Complex transmission(Barrier barrier, IncidentField field, double hz) {
         double w = 2 * Math.PI * hz;
-        Complex zw = field.waveImpedance(io.shieldmath.shield.quantity.Frequency.ofHertz(hz));
+        Complex zw = io.shieldmath.shield.TestComplex.cm(field.waveImpedance(io.shieldmath.shield.quantity.Frequency.ofHertz(hz)));
         FieldMatrix<Complex> m = identity();
         for (Layer layer : barrier.layers()) {
             m = m.multiply(layerMatrix(layer, w, hz));

@@ -51,11 +51,11 @@ class PlanarRangeCornersTest {
                             for (double h : hz) {
                                 PlanarResult r = b.facing(f).at(Frequency.ofHertz(h));
                                 String where = b + " " + f + " " + h + " Hz: " + r;
-                                assertTrue(Double.isFinite(r.totalDb()) && Double.isFinite(r.reflectionDb())
+                                assertTrue(Double.isFinite(r.shieldingEffectivenessDb()) && Double.isFinite(r.reflectionDb())
                                         && Double.isFinite(r.multipleReflectionDb())
                                         && Double.isFinite(r.transmissionDb()), where);
-                                assertEquals(r.totalDb(), r.absorptionDb() + r.reflectionDb()
-                                        + r.multipleReflectionDb(), 1e-9 * Math.max(1, Math.abs(r.totalDb())), where);
+                                assertEquals(r.shieldingEffectivenessDb(), r.absorptionDb() + r.reflectionDb()
+                                        + r.multipleReflectionDb(), 1e-9 * Math.max(1, Math.abs(r.shieldingEffectivenessDb())), where);
                                 checked++;
                             }
                         }

@@ -12,7 +12,7 @@ import static io.shieldmath.shield.quantity.Quantities.uT;
 
 import io.shieldmath.shield.design.MarginReport;
 import io.shieldmath.shield.design.Requirement;
-import io.shieldmath.shield.design.ShieldingModel;
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.enclosure.Enclosure;
 import io.shieldmath.shield.enclosure.EnclosureEvaluation;
 import io.shieldmath.shield.enclosure.Opening;
@@ -166,14 +166,16 @@ public final class DesignStudy {
     }
 
     /** The planar model with the field of whichever source dominates at each frequency. */
-    static ShieldingModel twoSources(PlanarEvaluation nearTransformer, PlanarEvaluation nearCharger) {
-        return hz -> (hz < SOURCE_SPLIT_HZ ? nearTransformer : nearCharger).shieldingEffectivenessDb(hz);
+    static ShieldingModel<?> twoSources(PlanarEvaluation nearTransformer, PlanarEvaluation nearCharger) {
+        return ShieldingModel.ofFunction(nearTransformer.barrier() + ", nearer source per band",
+                nearTransformer.validBand(),
+                hz -> (hz < SOURCE_SPLIT_HZ ? nearTransformer : nearCharger).shieldingEffectivenessDb(hz));
     }
 
     private static Evaluated plate(String kind, String name, List<DesignLayer> layers, IncidentField transformer,
                                    IncidentField charger, Requirement need, double[] sweepHz) {
         var barrier = io.shieldmath.shield.planar.Barrier.of(layers.stream().map(DesignLayer::toLayer).toList());
-        ShieldingModel model = twoSources(barrier.facing(transformer), barrier.facing(charger));
+        ShieldingModel<?> model = twoSources(barrier.facing(transformer), barrier.facing(charger));
         double mass = 0;
         for (DesignLayer l : layers) {
             if (l.material().isPresent()) {
@@ -187,8 +189,7 @@ public final class DesignStudy {
     private static Evaluated can(String kind, String name, Shell shell, List<DesignLayer> wallSourceSideFirst,
                                  Opening vent, Requirement need, double[] sweepHz) {
         EnclosureEvaluation e = Enclosure.of(shell).withOpening(vent).inUniformField();
-        ShieldingModel model = hz -> e.at(Frequency.ofHertz(hz)).totalDb();
-        MarginReport margin = need.marginOf(model);
+        MarginReport margin = need.marginOf(e);
         String limiting = e.at(margin.worst().frequency()).limitingPath().name();
         double area = 2 * (CAN_SIDES_M[0] * CAN_SIDES_M[1] + CAN_SIDES_M[1] * CAN_SIDES_M[2]
                 + CAN_SIDES_M[0] * CAN_SIDES_M[2]);
@@ -198,15 +199,11 @@ public final class DesignStudy {
                 mass += l.material().get().arealMass(l.thickness()) * area * 1000;
             }
         }
-        return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(model, sweepHz), shell);
+        return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(e, sweepHz), shell);
     }
 
-    private static double[] sweep(ShieldingModel m, double[] hz) {
-        double[] v = new double[hz.length];
-        for (int i = 0; i < hz.length; i++) {
-            v[i] = m.shieldingEffectivenessDb(hz[i]);
-        }
-        return v;
+    private static double[] sweep(ShieldingModel<?> m, double[] hz) {
+        return m.shieldingEffectivenessDb(hz, new double[hz.length]);
     }
 
     private static void printScenario(PrintStream out, Requirement need) {

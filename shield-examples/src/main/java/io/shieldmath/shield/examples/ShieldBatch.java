@@ -171,7 +171,7 @@ public final class ShieldBatch {
             out.println("frequency_hz,se_db,absorption_db,reflection_db,multiple_reflection_db");
             for (PlanarResult r : results) {
                 out.println(String.format(Locale.ROOT, "%s,%.6f,%.6f,%.6f,%.6f", shortest(r.frequency().toHertz()),
-                        r.totalDb(), r.absorptionDb(), r.reflectionDb(), r.multipleReflectionDb()));
+                        r.shieldingEffectivenessDb(), r.absorptionDb(), r.reflectionDb(), r.multipleReflectionDb()));
             }
         } else {
             StringBuilder s = new StringBuilder("{\n  \"design\": ").append(quote(design.title()))
@@ -181,7 +181,7 @@ public final class ShieldBatch {
                 PlanarResult r = results.get(i);
                 s.append(i == 0 ? "\n" : ",\n").append(String.format(Locale.ROOT,
                         "    {\"frequency_hz\": %s, \"se_db\": %.6f, \"absorption_db\": %.6f, \"reflection_db\": %.6f, "
-                                + "\"multiple_reflection_db\": %.6f}", shortest(r.frequency().toHertz()), r.totalDb(),
+                                + "\"multiple_reflection_db\": %.6f}", shortest(r.frequency().toHertz()), r.shieldingEffectivenessDb(),
                         r.absorptionDb(), r.reflectionDb(), r.multipleReflectionDb()));
             }
             s.append("\n  ]\n}");

@@ -3,11 +3,12 @@
  */
 package io.shieldmath.shield.materials;
 
+import io.shieldmath.shield.model.Sweep;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.planar.PlanarEvaluation;
-import io.shieldmath.shield.planar.PlanarSweep;
+import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.internal.Require;
@@ -33,7 +34,7 @@ import java.util.Objects;
  *         IncidentField.magneticNearField(cm(6), ImpedanceForm.EXACT_DIPOLE),
  *         FrequencyBand.parse("10 Hz to 100 kHz"), 41);
  * d.write(Path.of("study.json"));
- * PlanarSweep s = Design.read(Path.of("study.json"), cat).sweep();
+ * Sweep<PlanarResult> s = Design.read(Path.of("study.json"), cat).sweep();
  * }</pre>
  *
  * <p>The file format is described in {@link #toJson()}. Results are estimates for an
@@ -164,7 +165,7 @@ public final class Design {
      *
      * @return the sweep, with every frequency's shielding effectiveness and its parts
      */
-    public PlanarSweep sweep() {
+    public Sweep<PlanarResult> sweep() {
         return barrier.facing(field).sweep(band, points);
     }
 

@@ -40,7 +40,7 @@ public final class DesignLayer {
         this.kind = kind;
         this.material = material;
         this.celsius = celsius;
-        this.layer = Layer.of(medium, thickness);
+        this.layer = kind == Kind.GAP ? Layer.gap(thickness) : Layer.of(medium, thickness);
     }
 
     /**
