@@ -7,7 +7,8 @@
  * models. Its only runtime dependency is Apache Commons Math.
  */
 module io.shieldmath.shield.core {
-    requires transitive commons.math3;
+    // Commons Math is used inside the models only; no type of it appears in this module's API.
+    requires commons.math3;
 
     exports io.shieldmath.shield.quantity;
     exports io.shieldmath.shield.medium;

@@ -57,8 +57,9 @@ final class ChainMatrix {
      * @param zr    Re of the terminating impedance, Ω
      * @param zi    Im of the terminating impedance, Ω
      * @param parts null, or an array of at least n + 2 slots that receives: [0] arg T in
-     *              radians, [1] the interface (reflection) loss in dB, [2 + i] the
-     *              absorption of layer i in dB
+     *              radians, [1] the reflection loss R in dB (each layer that is not free
+     *              space against the terminating impedance on both of its faces, see
+     *              {@code PlanarResult}), [2 + i] the absorption of layer i in dB
      * @return ln |T|
      */
     static double logTransmission(double[] t, double[] sigma, double[] eps, PermeabilityModel[] mu,
@@ -71,7 +72,6 @@ final class ChainMatrix {
         double logScale = 0;
         double phase = 0;
         double reflection = 0;
-        double prevR = zr, prevI = zi;
         final int n = t.length;
         for (int i = 0; i < n; i++) {
             // jωµ = ωµ0µ'' + j ωµ0µ'   (µr = µ' − jµ'')
@@ -137,9 +137,13 @@ final class ChainMatrix {
             phase -= tb;
             if (parts != null) {
                 parts[2 + i] = DB_PER_NEPER * ta;
-                reflection += interfaceLossDb(prevR, prevI, etaR, etaI);
-                prevR = etaR;
-                prevI = etaI;
+                // R counts each layer that is not free space once, as if it stood alone between
+                // the terminating impedances: 2 × 10·log10|(Z + η)²/(4Zη)|. A free-space layer (an
+                // air gap) adds nothing, so R does not jump when a gap is inserted or shrinks to
+                // zero; the coupling between layers through the gaps is left to B.
+                if (!(s == 0 && we == wEps0 && p == 0 && q == wMu0)) {
+                    reflection += 2 * interfaceLossDb(zr, zi, etaR, etaI);
+                }
             }
         }
         // S = A + B/Z + C·Z + D
@@ -149,7 +153,7 @@ final class ChainMatrix {
         final double logS = logAbs(sr, si);
         if (parts != null) {
             parts[0] = phase - Math.atan2(si, sr);
-            parts[1] = reflection + interfaceLossDb(prevR, prevI, zr, zi);
+            parts[1] = reflection;
         }
         return LN2 - logS + logScale;
     }

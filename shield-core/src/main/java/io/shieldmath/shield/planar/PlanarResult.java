@@ -16,13 +16,22 @@ import java.util.Locale;
  * <ul>
  *   <li>A, absorption: Σ 20·log10|e^{γ_i t_i}| over the layers (8.686·t/δ for a good
  *       conductor); also given per layer.</li>
- *   <li>R, reflection: the single-pass loss of every interface, Σ 10·log10|(Z_a + Z_b)²/(4·Z_a·Z_b)|
- *       from the wave impedance through each layer's η and back to the wave impedance.
- *       For one layer this is exactly 20·log10|(1 + K)²/(4K)|, K = Zw/η (DOMAIN §3).</li>
- *   <li>B, multiple reflections: the rest, SE − A − R. For one layer in a plane wave it
- *       equals 20·log10|1 − ((K−1)/(K+1))²·e^{−2γt}|; in a near field it also holds the
- *       free-space reference term, which is negligible while k0·t ≪ 1. It is negative
- *       when re-reflections leak field through a thin shield.</li>
+ *   <li>R, reflection: for each layer that is not free space, the loss of its two faces
+ *       as if it stood alone between the wave impedance Zw on both sides,
+ *       Σ 20·log10|(1 + K_i)²/(4K_i)| with K_i = Zw/η_i. For one layer this is the classic
+ *       single-shield reflection loss (S. A. Schelkunoff's transmission-line view, as in
+ *       H. W. Ott, <i>Electromagnetic Compatibility Engineering</i>, Wiley 2009, ch. 6). Air
+ *       gaps add nothing, so R is continuous as a gap shrinks to zero and a slab of air alone
+ *       has R = 0.</li>
+ *   <li>B, multiple reflections and coupling: the rest, SE − A − R. For one layer in a plane
+ *       wave it equals 20·log10|1 − ((K−1)/(K+1))²·e^{−2γt}|. For several layers it also
+ *       holds the interaction of the layers through the gaps between them (negative or
+ *       positive). In a near field it further holds the free-space reference term of the
+ *       insertion loss: with the near-field wave impedance the free-space slab of the same
+ *       thickness does not transmit exactly 1, and the difference grows with the slab's
+ *       thickness t against the source distance r (about t/r for the textbook magnetic
+ *       impedance), not with k0·t. It is negative when re-reflections leak field through a
+ *       thin shield.</li>
  * </ul>
  *
  * <p>Immutable and thread-safe.
