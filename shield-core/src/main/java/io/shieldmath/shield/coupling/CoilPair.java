@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.internal.Bessel;
+import io.shieldmath.shield.internal.Elliptic;
+import io.shieldmath.shield.internal.SpectralRule;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;

@@ -3,10 +3,9 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
-import io.shieldmath.shield.medium.Medium;
-import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
@@ -15,6 +14,8 @@ import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.SpectralChain;
+import io.shieldmath.shield.internal.StackArrays;
 import java.util.List;
 
 /**
@@ -56,26 +57,15 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
 
     private final CoilPair pair;
     private final Barrier barrier;
-    private final double[] thickness;
-    private final double[] sigma;
-    private final PermeabilityModel[] mu;
+    private final StackArrays stack;
     private final PlanarEvaluation planar;
 
     CouplingEvaluation(CoilPair pair, Barrier barrier) {
         this.pair = pair;
         this.barrier = barrier;
         List<Layer> layers = barrier.layers();
-        int n = layers.size();
-        thickness = new double[n];
-        sigma = new double[n];
-        mu = new PermeabilityModel[n];
-        for (int i = 0; i < n; i++) {
-            Layer l = layers.get(i);
-            Medium m = l.medium();
-            thickness[i] = l.thickness().toMetres();
-            sigma[i] = m.conductivity().toSiemensPerMetre();
-            mu[i] = m.permeability();
-        }
+        stack = StackArrays.of("layer", layers.size(), i -> layers.get(i).medium(),
+                i -> layers.get(i).thickness().toMetres(), i -> layers.get(i).isGap());
         planar = barrier.facing(IncidentField.magneticNearField(Length.ofMetres(pair.separationMetres()),
                 ImpedanceForm.TEXTBOOK));
     }
@@ -145,7 +135,7 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
     public double shieldingEffectivenessDb(double hertz) {
         double hz = checkHertz("frequency", hertz);
         double[] out = new double[4];
-        SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, new double[SpectralChain.SLOTS * mu.length], out);
+        SpectralChain.sum(pair.rule(), stack.thickness(), stack.sigma(), stack.mu(), hz, new double[SpectralChain.SLOTS * stack.size()], out);
         return lossDb(out, hz);
     }
 
@@ -168,7 +158,7 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
             throw new IllegalArgumentException("output array holds " + outDb.length + " values but "
                     + hertz.length + " frequencies were given");
         }
-        double[] scratch = new double[SpectralChain.SLOTS * mu.length];
+        double[] scratch = new double[SpectralChain.SLOTS * stack.size()];
         double[] out = new double[4];
         for (int i = 0; i < hertz.length; i++) {
             double hz = hertz[i];
@@ -176,7 +166,7 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
                 // The message (a new string) is built only on failure: nothing is allocated per point.
                 checkHertz("frequency [" + i + "]", hz);
             }
-            SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, scratch, out);
+            SpectralChain.sum(pair.rule(), stack.thickness(), stack.sigma(), stack.mu(), hz, scratch, out);
             outDb[i] = lossDb(out, hz);
         }
         return outDb;
@@ -184,16 +174,16 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
 
     private CouplingResult evaluate(Frequency frequency, double hz) {
         double[] out = new double[4];
-        SpectralChain.sum(pair.rule(), thickness, sigma, mu, hz, new double[SpectralChain.SLOTS * mu.length], out);
+        SpectralChain.sum(pair.rule(), stack.thickness(), stack.sigma(), stack.mu(), hz, new double[SpectralChain.SLOTS * stack.size()], out);
         double il = lossDb(out, hz);
-        double logM = logAbs(out[0], out[1]) - out[2];
+        double logM = Numerics.logAbs(out[0], out[1]) - out[2];
         double phase = Math.atan2(out[1], out[0]);
         return new CouplingResult(frequency, pair.freeSpaceMutualInductance(), logM, phase, il,
                 planar.at(frequency));
     }
 
     private double lossDb(double[] out, double hz) {
-        double db = CouplingResult.DB_PER_NEPER * (Math.log(out[3]) - logAbs(out[0], out[1]) + out[2]);
+        double db = Numerics.DB_PER_NEPER * (Math.log(out[3]) - Numerics.logAbs(out[0], out[1]) + out[2]);
         if (!Double.isFinite(db)) {
             // Only a permeability model that breaks its contract (NaN, µ' ≤ 0) can get here.
             throw new ArithmeticException("insertion loss of " + barrier + " between " + pair + " at " + hz
@@ -201,17 +191,6 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
                     + "µ' > 0 and µ'' >= 0");
         }
         return db;
-    }
-
-    /** ln |x + jy| without overflow or underflow of the squares. */
-    static double logAbs(double x, double y) {
-        double m = Math.max(Math.abs(x), Math.abs(y));
-        if (m == 0) {
-            return Double.NEGATIVE_INFINITY;
-        }
-        double u = x / m;
-        double v = y / m;
-        return Math.log(m) + 0.5 * Math.log(u * u + v * v);
     }
 
     private static double checkHertz(String what, double hz) {

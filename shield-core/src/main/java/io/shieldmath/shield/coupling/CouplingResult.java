@@ -29,8 +29,6 @@ import java.util.Locale;
  */
 public final class CouplingResult implements ShieldingResult {
 
-    /** Decibels per neper of field amplitude, 20/ln 10. */
-    static final double DB_PER_NEPER = 20 / Math.log(10);
 
     private final Frequency frequency;
     private final double freeSpace;

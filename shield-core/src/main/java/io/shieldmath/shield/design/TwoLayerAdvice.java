@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.design;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.planar.Barrier;
@@ -35,7 +36,7 @@ import java.util.Locale;
 public final class TwoLayerAdvice {
 
     /** The fraction of the saturation flux density above which a warning is raised. */
-    public static final double WARNING_FRACTION = 0.5;
+    public static final double WARNING_FRACTION = io.shieldmath.shield.internal.Numerics.SATURATION_WARNING_FRACTION;
 
     private TwoLayerAdvice() {
     }

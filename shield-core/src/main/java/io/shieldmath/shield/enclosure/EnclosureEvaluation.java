@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.planar.PlanarEvaluation;
@@ -141,17 +142,17 @@ public final class EnclosureEvaluation implements ShieldingModel<EnclosureResult
         double p = e.pathSum() == PathSum.MAGNITUDES ? 1 : 2;
         double max = Double.NEGATIVE_INFINITY;
         for (double d : db) {
-            max = Math.max(max, -p * d / StaticShielding.DB_PER_NEPER);
+            max = Math.max(max, -p * d / Numerics.DB_PER_NEPER);
         }
         double sum = 0;
         for (double d : db) {
-            sum += Math.exp(-p * d / StaticShielding.DB_PER_NEPER - max);
+            sum += Math.exp(-p * d / Numerics.DB_PER_NEPER - max);
         }
         double logTau = (max + Math.log(sum)) / p;
-        double total = Math.max(0, -StaticShielding.DB_PER_NEPER * logTau);
+        double total = Math.max(0, -Numerics.DB_PER_NEPER * logTau);
         List<LeakagePath> paths = new ArrayList<>(n);
         for (int i = 0; i < n; i++) {
-            double share = Math.exp(-p * db[i] / StaticShielding.DB_PER_NEPER - max) / sum;
+            double share = Math.exp(-p * db[i] / Numerics.DB_PER_NEPER - max) / sum;
             paths.add(new LeakagePath(names[i], i == 0, db[i], share, models[i]));
         }
         return new EnclosureResult(frequency, e.pathSum(), total, paths);

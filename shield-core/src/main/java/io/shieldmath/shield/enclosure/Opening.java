@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.PhysicalConstants;
 import io.shieldmath.shield.internal.Require;
@@ -270,7 +271,7 @@ public final class Opening {
         if (x >= 1) {
             return 0;
         }
-        return StaticShielding.DB_PER_NEPER * tubeDepth.toMetres() * 2 * Math.PI / lc * Math.sqrt(1 - x * x);
+        return Numerics.DB_PER_NEPER * tubeDepth.toMetres() * 2 * Math.PI / lc * Math.sqrt(1 - x * x);
     }
 
     /** The far-field path SE: aperture − 10·log10 n + tube, at least 0. */

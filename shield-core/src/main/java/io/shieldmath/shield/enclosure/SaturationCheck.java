@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
@@ -39,7 +40,7 @@ import java.util.Optional;
 public final class SaturationCheck {
 
     /** The fraction of the saturation flux density at which the check warns. */
-    public static final double WARNING_FRACTION = 0.5;
+    public static final double WARNING_FRACTION = io.shieldmath.shield.internal.Numerics.SATURATION_WARNING_FRACTION;
 
     private final StaticShielding statics;
     private final MagneticFieldStrength ambient;

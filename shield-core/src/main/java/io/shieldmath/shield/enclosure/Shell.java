@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.planar.Barrier;
@@ -13,7 +14,9 @@ import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
+import io.shieldmath.shield.internal.RadialChain;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.StackArrays;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -82,7 +85,7 @@ public final class Shell implements ShieldingModel<ShellResult> {
             outer[i] = r;
             boolean isGap = l.isGap();
             sigma[i] = Require.inRange("wall " + (w.size() + 1) + " conductivity",
-                    l.medium().conductivity().toSiemensPerMetre(), 0, 1e10, "S/m");
+                    l.medium().conductivity().toSiemensPerMetre(), 0, StackArrays.MAX_SIEMENS_PER_METRE, "S/m");
             mu[i] = isGap ? null : l.medium().permeability();
             if (!isGap) {
                 w.add(new Wall(l.medium(), inner[i], outer[i]));
@@ -94,7 +97,11 @@ public final class Shell implements ShieldingModel<ShellResult> {
         }
         this.walls = Collections.unmodifiableList(w);
         this.wallLayer = idx.stream().mapToInt(Integer::intValue).toArray();
-        this.geometryCode = RadialChain.code(shape.geometry());
+        this.geometryCode = switch (shape.geometry()) {
+            case SPHERE -> RadialChain.SPHERE;
+            case CYLINDER_TRANSVERSE -> RadialChain.CYLINDER_TRANSVERSE;
+            case CYLINDER_AXIAL -> RadialChain.CYLINDER_AXIAL;
+        };
     }
 
     static Shell start(ShellShape shape, MediumSource medium, Length thickness) {
@@ -286,7 +293,7 @@ public final class Shell implements ShieldingModel<ShellResult> {
         double hz = checkHertz("frequency", hertz);
         double logS = RadialChain.logShielding(geometryCode, inner, outer, sigma, mu, hz, false, null, null);
         requireFinite(logS, hz);
-        return StaticShielding.DB_PER_NEPER * logS;
+        return Numerics.DB_PER_NEPER * logS;
     }
 
     /**

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.PhysicalConstants;
@@ -62,7 +63,7 @@ public final class ShellResult implements ShieldingResult {
      */
     @Override
     public double shieldingEffectivenessDb() {
-        return StaticShielding.DB_PER_NEPER * logS;
+        return Numerics.DB_PER_NEPER * logS;
     }
 
     /**
@@ -109,7 +110,7 @@ public final class ShellResult implements ShieldingResult {
      * @throws IndexOutOfBoundsException if there is no such wall
      */
     public double thinShellDb(int wall) {
-        return StaticShielding.DB_PER_NEPER * logThin(wall).getReal();
+        return Numerics.DB_PER_NEPER * logThin(wall).getReal();
     }
 
     private org.apache.commons.math3.complex.Complex logThin(int wall) {

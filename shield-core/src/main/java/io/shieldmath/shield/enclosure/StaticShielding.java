@@ -3,6 +3,8 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.internal.Numerics;
+import io.shieldmath.shield.internal.RadialChain;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Decibels;
@@ -35,8 +37,6 @@ import java.util.Locale;
  */
 public final class StaticShielding implements ShieldingResult {
 
-    /** Decibels per neper of field amplitude, 20/ln 10. */
-    static final double DB_PER_NEPER = 20 / Math.log(10);
 
     private final Shell shell;
     private final double logS;
@@ -83,7 +83,7 @@ public final class StaticShielding implements ShieldingResult {
      */
     @Override
     public double shieldingEffectivenessDb() {
-        return DB_PER_NEPER * logS;
+        return Numerics.DB_PER_NEPER * logS;
     }
 
     /**

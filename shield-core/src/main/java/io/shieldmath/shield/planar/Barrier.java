@@ -4,12 +4,10 @@
 package io.shieldmath.shield.planar;
 
 import io.shieldmath.shield.field.IncidentField;
-import io.shieldmath.shield.medium.ConstantPermeability;
-import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.MediumSource;
-import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.StackArrays;
 import io.shieldmath.shield.quantity.SheetResistance;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -34,15 +32,8 @@ public final class Barrier {
     public static final int MAX_LAYERS = 256;
 
     private final List<Layer> layers;
-    // Primitive copies for the hot path, indexed like the layers.
-    final double[] thickness;
-    final double[] sigma;
-    final double[] epsilon;
-    final PermeabilityModel[] mu;
-    /** The total thickness in a one-element array, for the free-space reference. */
-    final double[] total;
-    /** True if every layer is free space (σ = 0, µr = 1, εr = 1): the barrier is its own reference. */
-    final boolean freeSpaceOnly;
+    /** Primitive copies for the hot path, indexed like the layers. */
+    final StackArrays stack;
 
     private Barrier(List<Layer> layers) {
         if (layers.isEmpty()) {
@@ -52,27 +43,18 @@ public final class Barrier {
             throw new IllegalArgumentException("a barrier has at most " + MAX_LAYERS + " layers; got "
                     + layers.size());
         }
-        this.layers = Collections.unmodifiableList(new ArrayList<>(layers));
-        int n = layers.size();
-        thickness = new double[n];
-        sigma = new double[n];
-        epsilon = new double[n];
-        mu = new PermeabilityModel[n];
-        double sum = 0;
-        boolean vacuum = true;
-        for (int i = 0; i < n; i++) {
-            Layer l = Require.nonNull("layer " + (i + 1), layers.get(i));
-            Medium m = l.medium();
-            thickness[i] = l.thickness().toMetres();
-            sigma[i] = Require.inRange("layer " + (i + 1) + " conductivity", m.conductivity().toSiemensPerMetre(),
-                    0, 1e10, "S/m");
-            epsilon[i] = m.permittivity().value();
-            mu[i] = m.permeability();
-            sum += thickness[i];
-            vacuum &= sigma[i] == 0 && epsilon[i] == 1 && mu[i].equals(ConstantPermeability.ONE);
+        this.layers = layers;
+        this.stack = StackArrays.of("layer", layers.size(), i -> layers.get(i).medium(),
+                i -> layers.get(i).thickness().toMetres(), i -> layers.get(i).isGap());
+    }
+
+    /** An unmodifiable copy that names a null layer by its number before anything else can throw. */
+    private static List<Layer> checked(List<Layer> given) {
+        List<Layer> copy = new ArrayList<>(given.size());
+        for (int i = 0; i < given.size(); i++) {
+            copy.add(Require.nonNull("layer " + (i + 1), given.get(i)));
         }
-        total = new double[] {sum};
-        freeSpaceOnly = vacuum;
+        return Collections.unmodifiableList(copy);
     }
 
     /**
@@ -92,9 +74,10 @@ public final class Barrier {
      * @param layers one or more layers, none null
      * @return the barrier
      * @throws IllegalArgumentException if there are no layers or more than {@value #MAX_LAYERS}
+     * @throws NullPointerException if the array or a layer is null (the message names the layer's number)
      */
     public static Barrier of(Layer... layers) {
-        return new Barrier(List.of(Require.nonNull("layers", layers)));
+        return new Barrier(checked(java.util.Arrays.asList(Require.nonNull("layers", layers))));
     }
 
     /**
@@ -102,9 +85,11 @@ public final class Barrier {
      *
      * @param layers one or more layers, none null
      * @return the barrier
+     * @throws IllegalArgumentException if there are no layers or more than {@value #MAX_LAYERS}
+     * @throws NullPointerException if the list or a layer is null (the message names the layer's number)
      */
     public static Barrier of(List<Layer> layers) {
-        return new Barrier(List.copyOf(Require.nonNull("layers", layers)));
+        return new Barrier(checked(Require.nonNull("layers", layers)));
     }
 
     /**
@@ -127,7 +112,7 @@ public final class Barrier {
     public Barrier then(Layer layer) {
         List<Layer> l = new ArrayList<>(layers);
         l.add(Require.nonNull("layer", layer));
-        return new Barrier(l);
+        return new Barrier(Collections.unmodifiableList(l));
     }
 
     /**
@@ -162,7 +147,7 @@ public final class Barrier {
     public Barrier withLayer(int index, Layer layer) {
         List<Layer> l = new ArrayList<>(layers);
         l.set(index, Require.nonNull("layer", layer));
-        return new Barrier(l);
+        return new Barrier(Collections.unmodifiableList(l));
     }
 
     /**
@@ -173,7 +158,7 @@ public final class Barrier {
     public Barrier reversed() {
         List<Layer> l = new ArrayList<>(layers);
         Collections.reverse(l);
-        return new Barrier(l);
+        return new Barrier(Collections.unmodifiableList(l));
     }
 
     /**
@@ -200,7 +185,7 @@ public final class Barrier {
      * @return the sum of the layer thicknesses
      */
     public Length totalThickness() {
-        return Length.ofMetres(total[0]);
+        return Length.ofMetres(stack.total());
     }
 
     /**

@@ -8,7 +8,10 @@ import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
+import io.shieldmath.shield.internal.ChainMatrix;
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.StackArrays;
 
 /**
  * A barrier facing an incident field: evaluate it at one frequency, over a sweep, or in
@@ -37,10 +40,12 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
     private static final FrequencyBand VALID = FrequencyBand.of(Frequency.ofHertz(MIN_HERTZ), Frequency.ofHertz(MAX_HERTZ));
 
     private final Barrier barrier;
+    private final StackArrays stack;
     private final IncidentField field;
 
     PlanarEvaluation(Barrier barrier, IncidentField field) {
         this.barrier = barrier;
+        this.stack = barrier.stack;
         this.field = field;
     }
 
@@ -90,9 +95,9 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
         double[] parts = new double[n + 2];
         double zr = field.impedanceReal(hz);
         double zi = field.impedanceImaginary(hz);
-        double logT = ChainMatrix.logTransmission(barrier.thickness, barrier.sigma, barrier.epsilon, barrier.mu,
+        double logT = ChainMatrix.logTransmission(stack.thickness(), stack.sigma(), stack.epsilon(), stack.mu(),
                 hz, zr, zi, parts);
-        double se = ChainMatrix.DB_PER_NEPER * (logFreeSpace(hz, zr, zi, logT) - logT);
+        double se = Numerics.DB_PER_NEPER * (logFreeSpace(hz, zr, zi, logT) - logT);
         double[] absorption = new double[n];
         System.arraycopy(parts, 2, absorption, 0, n);
         requireFinite(se, hz);
@@ -154,9 +159,9 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
     private double seDb(double hz) {
         double zr = field.impedanceReal(hz);
         double zi = field.impedanceImaginary(hz);
-        double logT = ChainMatrix.logTransmission(barrier.thickness, barrier.sigma, barrier.epsilon, barrier.mu,
+        double logT = ChainMatrix.logTransmission(stack.thickness(), stack.sigma(), stack.epsilon(), stack.mu(),
                 hz, zr, zi, null);
-        double se = ChainMatrix.DB_PER_NEPER * (logFreeSpace(hz, zr, zi, logT) - logT);
+        double se = Numerics.DB_PER_NEPER * (logFreeSpace(hz, zr, zi, logT) - logT);
         requireFinite(se, hz);
         return se;
     }
@@ -167,7 +172,7 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
      * closed form and of the layer product; any other barrier uses the closed form.
      */
     private double logFreeSpace(double hz, double zr, double zi, double logT) {
-        return barrier.freeSpaceOnly ? logT : ChainMatrix.logFreeSpaceTransmission(barrier.total[0], hz, zr, zi);
+        return stack.freeSpaceOnly() ? logT : ChainMatrix.logFreeSpaceTransmission(stack.total(), hz, zr, zi);
     }
 
     private void requireFinite(double se, double hz) {

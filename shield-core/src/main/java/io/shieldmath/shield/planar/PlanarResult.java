@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.planar;
 
+import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Complex;
@@ -145,7 +146,7 @@ public final class PlanarResult implements ShieldingResult {
      * @return |T| in dB, usually negative
      */
     public double transmissionDb() {
-        return ChainMatrix.DB_PER_NEPER * logT;
+        return Numerics.DB_PER_NEPER * logT;
     }
 
     /**

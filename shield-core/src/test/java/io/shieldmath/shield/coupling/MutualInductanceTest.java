@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.internal.Elliptic;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import io.shieldmath.shield.quantity.Length;

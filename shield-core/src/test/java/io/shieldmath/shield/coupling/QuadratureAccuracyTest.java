@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.internal.Bessel;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import io.shieldmath.shield.medium.Medium;

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.internal.Elliptic;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.PhysicalConstants;

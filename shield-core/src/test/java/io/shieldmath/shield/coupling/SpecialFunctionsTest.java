@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.internal.GaussLegendre;
+import io.shieldmath.shield.internal.Elliptic;
+import io.shieldmath.shield.internal.Bessel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.enclosure;
 
+import io.shieldmath.shield.internal.Bessel;
 import io.shieldmath.shield.model.Sweep;
 import static io.shieldmath.shield.quantity.Quantities.Hz;
 import static io.shieldmath.shield.quantity.Quantities.iacs;

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.planar;
 
+import io.shieldmath.shield.internal.ChainMatrix;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.longs;

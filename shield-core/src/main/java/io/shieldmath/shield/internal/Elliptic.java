@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.internal;
 
 import io.shieldmath.shield.quantity.PhysicalConstants;
 
@@ -15,7 +15,7 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * modulus convention K(k) = ∫0^{π/2} dθ / sqrt(1 − k²·sin²θ)). The c_n are computed as
  * c_{n+1} = c_n² / (4·a_{n+1}), which has no cancellation.
  */
-final class Elliptic {
+public final class Elliptic {
 
     private Elliptic() {
     }
@@ -28,7 +28,7 @@ final class Elliptic {
      * @param kc2 k'² = 1 − k², in (0, 1]
      * @param out receives [0] K(k), [1] Σ_{n≥1} 2^{n−1}·c_n²
      */
-    static void agm(double k2, double kc2, double[] out) {
+    public static void agm(double k2, double kc2, double[] out) {
         double a = 1;
         double b = Math.sqrt(kc2);
         double c = Math.sqrt(k2);
@@ -57,7 +57,7 @@ final class Elliptic {
      * @param k the modulus, in [0, 1)
      * @return K(k)
      */
-    static double firstKind(double k) {
+    public static double firstKind(double k) {
         double[] r = new double[2];
         agm(k * k, (1 - k) * (1 + k), r);
         return r[0];
@@ -69,7 +69,7 @@ final class Elliptic {
      * @param k the modulus, in [0, 1)
      * @return E(k)
      */
-    static double secondKind(double k) {
+    public static double secondKind(double k) {
         double[] r = new double[2];
         double k2 = k * k;
         agm(k2, (1 - k) * (1 + k), r);
@@ -90,7 +90,7 @@ final class Elliptic {
      * @param z the plane separation in m, 0 or more (not 0 if a = b)
      * @return M in henries, greater than 0
      */
-    static double maxwell(double a, double b, double z) {
+    public static double maxwell(double a, double b, double z) {
         double den = (a + b) * (a + b) + z * z;
         double k2 = 4 * a * b / den;
         double kc2 = ((a - b) * (a - b) + z * z) / den;

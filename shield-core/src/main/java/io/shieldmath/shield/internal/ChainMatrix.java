@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.planar;
+package io.shieldmath.shield.internal;
 
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.quantity.PhysicalConstants;
@@ -28,18 +28,17 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * reference of the insertion loss has a closed form ({@link #logFreeSpaceTransmission})
  * instead of a second pass through the layer loop.
  */
-final class ChainMatrix {
+public final class ChainMatrix {
 
-    static final double LN2 = Math.log(2);
-    /** Decibels per neper of field amplitude, 20/ln 10 = 8.686. */
-    static final double DB_PER_NEPER = 20 / Math.log(10);
+    private static final double LN2 = Numerics.LN2;
+    private static final double DB_PER_NEPER = Numerics.DB_PER_NEPER;
 
     /**
      * Below this |x|, {@link #expm1Fast} calls {@link Math#expm1}; at or above it,
      * e^x − 1 has a relative error under 4e-16 (|e^x − 1| ≥ 0.39 there, and the rounding
      * of e^x is below 1.2e-16 in absolute terms).
      */
-    static final double EXPM1_CUTOFF = 0.5;
+    public static final double EXPM1_CUTOFF = 0.5;
     /** sqrt(µ0·ε0) in s/m: k0 = ω·sqrt(µ0·ε0) for free space. */
     private static final double SQRT_MU0_EPS0 = Math.sqrt(PhysicalConstants.MU_0 * PhysicalConstants.EPSILON_0);
 
@@ -62,7 +61,7 @@ final class ChainMatrix {
      *              {@code PlanarResult}), [2 + i] the absorption of layer i in dB
      * @return ln |T|
      */
-    static double logTransmission(double[] t, double[] sigma, double[] eps, PermeabilityModel[] mu,
+    public static double logTransmission(double[] t, double[] sigma, double[] eps, PermeabilityModel[] mu,
                                   double hz, double zr, double zi, double[] parts) {
         final double w = 2 * Math.PI * hz;
         final double wMu0 = w * PhysicalConstants.MU_0;
@@ -178,7 +177,7 @@ final class ChainMatrix {
      * @param zi     Im of the terminating impedance, Ω
      * @return ln |T_free|
      */
-    static double logFreeSpaceTransmission(double metres, double hz, double zr, double zi) {
+    public static double logFreeSpaceTransmission(double metres, double hz, double zr, double zi) {
         final double eta0 = PhysicalConstants.ETA_0;
         final double dr = zr - eta0;
         final double di = zi;
@@ -202,33 +201,33 @@ final class ChainMatrix {
      * e^x − 1 for x ≤ 0, accurate to a few units in the last place: exactly 0 at x = 0 (a
      * lossless layer), {@link Math#expm1} where |x| &lt; {@value #EXPM1_CUTOFF} (where
      * e^x − 1 would cancel), and the cheaper {@code Math.exp(x) - 1} elsewhere.
+     *
+     * @param x the exponent, 0 or less
+     * @return e^x − 1
      */
-    static double expm1Fast(double x) {
+    public static double expm1Fast(double x) {
         if (x == 0) {
             return 0;
         }
         return x > -EXPM1_CUTOFF ? Math.expm1(x) : Math.exp(x) - 1;
     }
 
-    /** 10·log10 |(Za + Zb)² / (4·Za·Zb)|: the loss of one interface, symmetric in Za and Zb. */
-    static double interfaceLossDb(double ar, double ai, double br, double bi) {
+    /**
+     * 10·log10 |(Za + Zb)² / (4·Za·Zb)|: the loss of one interface, symmetric in Za and Zb.
+     *
+     * @param ar Re Za, Ω
+     * @param ai Im Za, Ω
+     * @param br Re Zb, Ω
+     * @param bi Im Zb, Ω
+     * @return the loss in dB
+     */
+    public static double interfaceLossDb(double ar, double ai, double br, double bi) {
         double sumLog = logAbs(ar + br, ai + bi);
         double prodLog = 0.5 * (logAbs(ar, ai) + logAbs(br, bi));
         return DB_PER_NEPER * (sumLog - LN2 - prodLog);
     }
 
-    /** ln |x + jy| without overflow or underflow of the squares. */
-    static double logAbs(double x, double y) {
-        double s = x * x + y * y;
-        if (s > Double.MIN_NORMAL && s < Double.POSITIVE_INFINITY) {
-            return 0.5 * Math.log(s);
-        }
-        double m = Math.max(Math.abs(x), Math.abs(y));
-        if (m == 0) {
-            return Double.NEGATIVE_INFINITY;
-        }
-        double u = x / m;
-        double v = y / m;
-        return Math.log(m) + 0.5 * Math.log(u * u + v * v);
+    private static double logAbs(double x, double y) {
+        return Numerics.logAbs(x, y);
     }
 }

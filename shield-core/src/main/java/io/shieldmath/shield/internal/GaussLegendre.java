@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.internal;
 
 /**
  * Gauss–Legendre nodes and weights on [−1, 1], computed once by Newton's method on the
@@ -9,12 +9,19 @@ package io.shieldmath.shield.coupling;
  * (G. H. Golub and J. H. Welsch, Math. Comp. 23 (1969) 221, give the same rule by
  * eigenvalues; Abramowitz and Stegun, table 25.4, tabulates it). Immutable.
  */
-final class GaussLegendre {
+public final class GaussLegendre {
 
-    final double[] x;
-    final double[] w;
+    /** The nodes on [−1, 1], increasing (do not modify). */
+    public final double[] x;
+    /** The weights, summing to 2 (do not modify). */
+    public final double[] w;
 
-    GaussLegendre(int n) {
+    /**
+     * The n-point rule.
+     *
+     * @param n the number of nodes, 1 or more
+     */
+    public GaussLegendre(int n) {
         x = new double[n];
         w = new double[n];
         for (int i = 0; i < (n + 1) / 2; i++) {

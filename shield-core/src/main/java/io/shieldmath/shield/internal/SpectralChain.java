@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.internal;
 
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.quantity.PhysicalConstants;
@@ -28,11 +28,11 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * so thick stacks neither underflow nor overflow: the scaled F at every node is at most
  * e^{λt}·|(…)| and Λ0 is returned separately.
  */
-final class SpectralChain {
+public final class SpectralChain {
 
     /** Slots per layer in the scratch array. */
-    static final int SLOTS = 6;
-    private static final double LN2 = Math.log(2);
+    public static final int SLOTS = 6;
+    private static final double LN2 = Numerics.LN2;
     private static final double LN10 = Math.log(10);
 
     private SpectralChain() {
@@ -50,7 +50,7 @@ final class SpectralChain {
      * @param out     receives [0] Re, [1] Im of the scaled sum in H, [2] Λ0 in nepers, [3] the
      *                free-space sum over the same nodes in H (the reference for insertion loss)
      */
-    static void sum(SpectralRule rule, double[] t, double[] sigma, PermeabilityModel[] mu, double hz,
+    public static void sum(SpectralRule rule, double[] t, double[] sigma, PermeabilityModel[] mu, double hz,
                     double[] scratch, double[] out) {
         final int n = t.length;
         final double wMu0 = 2 * Math.PI * hz * PhysicalConstants.MU_0;

@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.internal;
 
 /**
  * The Bessel function of the first kind of order one, J1(x), for x ≥ 0, on primitives and
@@ -19,7 +19,7 @@ package io.shieldmath.shield.coupling;
  * </ul>
  * Stateless and thread-safe.
  */
-final class Bessel {
+public final class Bessel {
 
     private static final int SERIES_TERMS = 24;
     /** Series coefficients c_m = (−1)^m / (m!·(m+1)!), for J1(x) = (x/2)·Σ c_m·((x/2)²)^m. */
@@ -42,7 +42,7 @@ final class Bessel {
      * @param x the argument, 0 or more and finite
      * @return J1(x)
      */
-    static double j1(double x) {
+    public static double j1(double x) {
         if (x < 8) {
             double h = 0.5 * x;
             double y = h * h;

@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.enclosure;
+package io.shieldmath.shield.internal;
 
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.quantity.PhysicalConstants;
@@ -37,29 +37,21 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * renormalised after each step; both scales are carried as a logarithm, so |S| stays
  * finite in dB for any thickness.
  */
-final class RadialChain {
+public final class RadialChain {
 
     /** The largest sublayer thickness in ln r. */
-    static final double MAX_STEP = 0.001;
+    public static final double MAX_STEP = 0.001;
     /** The most sublayers in one wall. */
-    static final int MAX_SUBLAYERS = 1 << 15;
+    public static final int MAX_SUBLAYERS = 1 << 15;
 
-    static final int SPHERE = 0;
-    static final int CYLINDER_TRANSVERSE = 1;
-    static final int CYLINDER_AXIAL = 2;
+    /** Geometry code: a spherical shell. */
+    public static final int SPHERE = 0;
+    /** Geometry code: a long cylinder across the field. */
+    public static final int CYLINDER_TRANSVERSE = 1;
+    /** Geometry code: a long cylinder along the field. */
+    public static final int CYLINDER_AXIAL = 2;
 
     private RadialChain() {
-    }
-
-    static int code(ShellGeometry g) {
-        switch (g) {
-            case SPHERE:
-                return SPHERE;
-            case CYLINDER_TRANSVERSE:
-                return CYLINDER_TRANSVERSE;
-            default:
-                return CYLINDER_AXIAL;
-        }
     }
 
     /**
@@ -78,7 +70,7 @@ final class RadialChain {
      *                    (static only; gaps receive NaN)
      * @return ln |S|
      */
-    static double logShielding(int geometry, double[] inner, double[] outer, double[] sigma,
+    public static double logShielding(int geometry, double[] inner, double[] outer, double[] sigma,
                                PermeabilityModel[] mu, double hz, boolean staticField, double[] out,
                                double[] wallLogFlux) {
         final double omega = 2 * Math.PI * hz;

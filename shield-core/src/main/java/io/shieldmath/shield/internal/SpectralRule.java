@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.internal;
 
 import io.shieldmath.shield.quantity.PhysicalConstants;
 
@@ -34,38 +34,54 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * </ul>
  * Immutable and thread-safe.
  */
-final class SpectralRule {
+public final class SpectralRule {
 
-    static final int GRADED_PANELS = 9;
-    static final int GRADED_NODES = 8;
-    static final int UNIFORM_NODES = 12;
-    static final double PANEL_SCALE = 6;
-    static final double CUT_OFF = 26;
+    /** The number of geometrically graded panels near λ = 0. */
+    public static final int GRADED_PANELS = 9;
+    /** Gauss–Legendre nodes per graded panel. */
+    public static final int GRADED_NODES = 8;
+    /** Gauss–Legendre nodes per equal panel. */
+    public static final int UNIFORM_NODES = 12;
+    /** H·max(ρ, s): the equal panels' width H is this over the larger of the largest ring radius ρ and the gap s. */
+    public static final double PANEL_SCALE = 6;
+    /** λ·s where the spectrum is cut: beyond it the kernel is below e^{−26} ≈ 5e-12 of its size near λ = 0. */
+    public static final double CUT_OFF = 26;
 
     private static final GaussLegendre GRADED = new GaussLegendre(GRADED_NODES);
     private static final GaussLegendre UNIFORM = new GaussLegendre(UNIFORM_NODES);
 
     /** The nodes λ_k in 1/m, increasing. */
-    final double[] lambda;
+    public final double[] lambda;
     /** The weights including the kernel, in H·m (so Σ W_k·F(λ_k) is in henries). */
-    final double[] weight;
+    public final double[] weight;
     /** The first node of the graded panels; nodes before it form the single panel over [0, H/4]. */
-    final int gradedFrom;
+    public final int gradedFrom;
     /** The first node of the equal panels. */
-    final int uniformFrom;
+    public final int uniformFrom;
     /**
      * The smallest feature scale of the stack (in 1/m) for which the single panel over
      * [0, H/4] replaces the graded ones: 2H, eight times the panel's length, so that the
      * transmission is analytic in a disc of radius 2H about λ = 0 and the 12-point rule
      * on the panel converges like 5.8^{−24}.
      */
-    final double smoothScale;
+    public final double smoothScale;
     /** Σ W_k over the graded and equal panels: the free-space mutual inductance by this rule, in H. */
-    final double freeSpace;
+    public final double freeSpace;
     /** The same with the single panel over [0, H/4] in place of the graded ones, in H. */
-    final double freeSpaceCoarse;
+    public final double freeSpaceCoarse;
 
-    SpectralRule(double[] txRadius, double[] txDepth, double txTurns, double[] rxRadius, double[] rxDepth,
+    /**
+     * The rule for two coils given as rings.
+     *
+     * @param txRadius radius of each transmitter ring, m
+     * @param txDepth  depth of each transmitter ring behind its coil's plane nearest the receiver, m
+     * @param txTurns  turns per transmitter ring
+     * @param rxRadius radius of each receiver ring, m
+     * @param rxDepth  depth of each receiver ring behind its coil's plane nearest the transmitter, m
+     * @param rxTurns  turns per receiver ring
+     * @param gap      the gap s between the nearest ring planes of the two coils, m
+     */
+    public SpectralRule(double[] txRadius, double[] txDepth, double txTurns, double[] rxRadius, double[] rxDepth,
                  double rxTurns, double gap) {
         double rho = 0;
         for (double r : txRadius) {
@@ -135,8 +151,12 @@ final class SpectralRule {
         return s;
     }
 
-    /** The number of nodes. */
-    int size() {
+    /**
+     * The number of nodes.
+     *
+     * @return the size
+     */
+    public int size() {
         return lambda.length;
     }
 }
