@@ -18,6 +18,7 @@ module io.shieldmath.shield.core {
     exports io.shieldmath.shield.design;
     exports io.shieldmath.shield.enclosure;
     exports io.shieldmath.shield.coupling;
+    exports io.shieldmath.shield.bench;
 
     // Engine kernels, argument checks and text helpers shared by this library's own modules only.
     exports io.shieldmath.shield.internal to io.shieldmath.shield.materials;

@@ -35,7 +35,7 @@ import java.util.List;
  * free-space wavelength (k0·max(radius, d) below about 0.1, for 10 cm coils up to some tens
  * of MHz); the permittivity of the layers is ignored. The barrier is infinite: a real plate
  * lets field round its edges, so a bench measurement saturates below this result (see
- * {@link BenchComparison}). Quadrature accuracy: 1e-6 relative or better from 1 Hz to
+ * {@link io.shieldmath.shield.bench.BenchComparison}). Quadrature accuracy: 1e-6 relative or better from 1 Hz to
  * 10 MHz, radii 1 mm to 1 m, gaps 0.1 to 10 radii, stacks of microns to centimetres,
  * high-permeability layers included (verified against an adaptive Commons Math integration),
  * while the insertion loss stays below about 200 dB; beyond that the dropped tail of the

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.bench.BenchVerdict;
+import io.shieldmath.shield.bench.VoltageReading;
+import io.shieldmath.shield.bench.BenchComparison;
 import io.shieldmath.shield.internal.Elliptic;
 import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.model.Sweep;

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.bench.BenchVerdict;
+import io.shieldmath.shield.bench.VoltageReading;
+import io.shieldmath.shield.bench.BenchComparison;
 import static io.shieldmath.shield.quantity.Quantities.iacs;
 import static io.shieldmath.shield.quantity.Quantities.kHz;
 import static io.shieldmath.shield.quantity.Quantities.mm;

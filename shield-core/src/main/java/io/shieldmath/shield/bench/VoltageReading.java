@@ -1,8 +1,9 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.bench;
 
+import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 

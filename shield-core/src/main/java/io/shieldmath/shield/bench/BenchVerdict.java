@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.bench;
 
 /**
  * What a bench measurement of insertion loss says when held against the infinite-sheet

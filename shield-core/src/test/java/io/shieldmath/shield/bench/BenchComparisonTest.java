@@ -1,8 +1,10 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.coupling;
+package io.shieldmath.shield.bench;
 
+import io.shieldmath.shield.coupling.AmplitudeMeasure;
+import io.shieldmath.shield.coupling.SineVoltage;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
