@@ -4,6 +4,7 @@ import static io.shieldmath.shield.quantity.Quantities.*;
 import io.shieldmath.shield.field.*;
 import io.shieldmath.shield.planar.*;
 import io.shieldmath.shield.design.*;
+import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.materials.*;
 
@@ -11,6 +12,7 @@ var copper = Catalogue.builtIn().get("copper-annealed");
 var band = FrequencyBand.of(kHz(10), kHz(100));
 for (var field : new IncidentField[] {IncidentField.planeWave(),
         IncidentField.magneticNearField(cm(10), ImpedanceForm.TEXTBOOK)}) {
-    var s = ThicknessSolver.minimumThickness(Barrier.of(copper, mm(1)), 0, field, band, 60, mm(10));
+    var plate = Barrier.of(copper, mm(1));
+    var s = ThicknessSolver.resizing(plate, plate.layers().get(0)).facing(field).over(band).toMeet(Decibels.of(60)).upTo(mm(10));
     System.out.println(field + ": " + s.explanation());
 }

@@ -5,6 +5,7 @@ package io.shieldmath.shield.benchmarks;
 
 import io.shieldmath.shield.design.ToleranceResult;
 import io.shieldmath.shield.design.ToleranceStudy;
+import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.medium.Medium;
@@ -82,7 +83,7 @@ public class MonteCarloBenchmark {
      */
     @Benchmark
     public double hundredThousandSamples() {
-        ToleranceResult r = study.run(frequency, 40, SAMPLES, 42L, ToleranceStudy.ProgressListener.NONE);
+        ToleranceResult r = study.at(frequency).toMeet(Decibels.of(40)).samples(SAMPLES).seed(42L).run();
         return r.percentileDb(5);
     }
 }

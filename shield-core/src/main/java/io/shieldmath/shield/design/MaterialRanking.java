@@ -5,6 +5,7 @@ package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
@@ -71,14 +72,15 @@ public final class MaterialRanking {
      * @param candidates the materials, not null, none null
      * @param field      the incident field, not null
      * @param band       the band the target must hold over, not null
-     * @param targetDb   the target SE in dB
+     * @param target     the target SE, not null
      * @param limit      the largest thickness allowed
      * @param by         the criterion, not null
      * @return the ranking
      * @throws IllegalArgumentException if a cost criterion is chosen and a meeting candidate has no such price
      */
-    public static Ranking rank(List<Candidate> candidates, IncidentField field, FrequencyBand band, double targetDb,
+    public static Ranking rank(List<Candidate> candidates, IncidentField field, FrequencyBand band, Decibels target,
                                Length limit, Criterion by) {
+        double targetDb = Require.nonNull("target", target).toDb();
         Require.nonNull("candidates", candidates);
         Require.nonNull("field", field);
         Require.nonNull("criterion", by);

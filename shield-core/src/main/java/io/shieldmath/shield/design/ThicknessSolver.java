@@ -6,6 +6,8 @@ package io.shieldmath.shield.design;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.planar.Layer;
+import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
@@ -38,6 +40,175 @@ public final class ThicknessSolver {
     }
 
     /**
+     * Starts a search for the thinnest {@code layer} of a planar barrier, the other layers
+     * kept:
+     *
+     * <pre>{@code
+     * Layer steel = barrier.layers().get(2);
+     * ThicknessSolution s = ThicknessSolver.resizing(barrier, steel)
+     *         .facing(loop).over(FrequencyBand.of(Hz(10), kHz(100))).toMeet(Decibels.of(75)).upTo(mm(4));
+     * }</pre>
+     *
+     * @param barrier the barrier, not null
+     * @param layer   the layer to resize, not null; it must occur exactly once in the barrier
+     *                (gaps are layers too: pick the layer itself, not a count)
+     * @return the search, to be given a field, a band, a target and a limit
+     * @throws IllegalArgumentException if the layer is not in the barrier, or is there more than once
+     */
+    public static Search resizing(Barrier barrier, Layer layer) {
+        Require.nonNull("barrier", barrier);
+        Require.nonNull("layer", layer);
+        int index = -1;
+        int count = 0;
+        for (int i = 0; i < barrier.layerCount(); i++) {
+            if (barrier.layers().get(i).equals(layer)) {
+                index = i;
+                count++;
+            }
+        }
+        if (count != 1) {
+            throw new IllegalArgumentException("the layer " + layer + " occurs " + count + " times in " + barrier
+                    + "; resize a layer that occurs exactly once");
+        }
+        return new Search(barrier, index, null, null, null);
+    }
+
+    /**
+     * A search for the thinnest layer, built a step at a time: {@link #facing(IncidentField)},
+     * {@link #over(FrequencyBand)}, {@link #toMeet(Decibels)}, then {@link #upTo(Length)}
+     * runs it. Immutable; each step returns a new search.
+     */
+    public static final class Search {
+        private final Barrier barrier;
+        private final int index;
+        private final IncidentField field;
+        private final FrequencyBand band;
+        private final Decibels target;
+
+        private Search(Barrier barrier, int index, IncidentField field, FrequencyBand band, Decibels target) {
+            this.barrier = barrier;
+            this.index = index;
+            this.field = field;
+            this.band = band;
+            this.target = target;
+        }
+
+        /**
+         * The incident field.
+         *
+         * @param incident the field, not null
+         * @return the search with this field
+         */
+        public Search facing(IncidentField incident) {
+            return new Search(barrier, index, Require.nonNull("field", incident), band, target);
+        }
+
+        /**
+         * The band over which the target must hold, worst case.
+         *
+         * @param frequencies the band, not null
+         * @return the search with this band
+         */
+        public Search over(FrequencyBand frequencies) {
+            return new Search(barrier, index, field, Require.nonNull("band", frequencies), target);
+        }
+
+        /**
+         * The target shielding effectiveness.
+         *
+         * @param se the target, not null
+         * @return the search with this target
+         */
+        public Search toMeet(Decibels se) {
+            return new Search(barrier, index, field, band, Require.nonNull("target", se));
+        }
+
+        /**
+         * Runs the search up to a thickness limit.
+         *
+         * @param limit the largest thickness allowed for the layer, from 1 nm to 100 m
+         * @return the solution
+         * @throws IllegalStateException if the field, the band or the target has not been given
+         */
+        public ThicknessSolution upTo(Length limit) {
+            if (field == null || band == null || target == null) {
+                throw new IllegalStateException("the thickness search needs "
+                        + (field == null ? "facing(field)" : band == null ? "over(band)" : "toMeet(target)")
+                        + " before upTo(limit)");
+            }
+            return minimumThickness(barrier, index, field, band, target.toDb(), limit);
+        }
+
+        @Override
+        public String toString() {
+            return "thinnest layer " + (index + 1) + " of " + barrier;
+        }
+    }
+
+    /**
+     * Starts a search for the thinnest wall of any model: {@code modelOfThickness} gives the
+     * model for a wall thickness in metres.
+     *
+     * @param modelOfThickness the model for a wall thickness in metres, not null
+     * @return the search, to be given a band, a target and the thickness range
+     */
+    public static AnyModel resizing(DoubleFunction<? extends ShieldingModel<?>> modelOfThickness) {
+        return new AnyModel(Require.nonNull("model of thickness", modelOfThickness), null, null);
+    }
+
+    /**
+     * A search for the thinnest wall of any model: {@link #over(FrequencyBand)},
+     * {@link #toMeet(Decibels)}, then {@link #between(Length, Length)} runs it. Immutable.
+     */
+    public static final class AnyModel {
+        private final DoubleFunction<? extends ShieldingModel<?>> model;
+        private final FrequencyBand band;
+        private final Decibels target;
+
+        private AnyModel(DoubleFunction<? extends ShieldingModel<?>> model, FrequencyBand band, Decibels target) {
+            this.model = model;
+            this.band = band;
+            this.target = target;
+        }
+
+        /**
+         * The band over which the target must hold, worst case.
+         *
+         * @param frequencies the band, not null
+         * @return the search with this band
+         */
+        public AnyModel over(FrequencyBand frequencies) {
+            return new AnyModel(model, Require.nonNull("band", frequencies), target);
+        }
+
+        /**
+         * The target shielding effectiveness.
+         *
+         * @param se the target, not null
+         * @return the search with this target
+         */
+        public AnyModel toMeet(Decibels se) {
+            return new AnyModel(model, band, Require.nonNull("target", se));
+        }
+
+        /**
+         * Runs the search between two thicknesses.
+         *
+         * @param smallest the thinnest wall considered, not null
+         * @param limit    the thickest wall allowed, not below {@code smallest}, at most 100 m
+         * @return the solution
+         * @throws IllegalStateException if the band or the target has not been given
+         */
+        public ThicknessSolution between(Length smallest, Length limit) {
+            if (band == null || target == null) {
+                throw new IllegalStateException("the thickness search needs "
+                        + (band == null ? "over(band)" : "toMeet(target)") + " before between(smallest, limit)");
+            }
+            return minimumThickness(model, band, target.toDb(), smallest, limit);
+        }
+    }
+
+    /**
      * The thinnest layer {@code layer} of a planar barrier that meets the target in a field
      * over a band, the other layers kept.
      *
@@ -49,7 +220,7 @@ public final class ThicknessSolver {
      * @param limit    the largest thickness allowed for that layer, from 1 nm to 100 m
      * @return the solution
      */
-    public static ThicknessSolution minimumThickness(Barrier barrier, int layer, IncidentField field,
+    static ThicknessSolution minimumThickness(Barrier barrier, int layer, IncidentField field,
                                                      FrequencyBand band, double targetDb, Length limit) {
         Require.nonNull("barrier", barrier);
         Require.nonNull("field", field);
@@ -72,7 +243,7 @@ public final class ThicknessSolver {
      * @param limit            the thickest wall allowed, not below {@code smallest}
      * @return the solution
      */
-    public static ThicknessSolution minimumThickness(DoubleFunction<? extends ShieldingModel<?>> modelOfThickness,
+    static ThicknessSolution minimumThickness(DoubleFunction<? extends ShieldingModel<?>> modelOfThickness,
                                                      FrequencyBand band, double targetDb, Length smallest,
                                                      Length limit) {
         Require.nonNull("model of thickness", modelOfThickness);

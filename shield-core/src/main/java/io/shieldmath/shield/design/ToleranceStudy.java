@@ -9,6 +9,7 @@ import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Conductivity;
+import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
@@ -151,6 +152,112 @@ public final class ToleranceStudy {
     }
 
     /**
+     * Starts a run at one frequency:
+     *
+     * <pre>{@code
+     * ToleranceResult t = study.at(kHz(20)).toMeet(Decibels.of(60)).samples(100_000).seed(42).run();
+     * }</pre>
+     *
+     * @param frequency the frequency, not null
+     * @return the first stage of the run; give it the target with {@link AtFrequency#toMeet(Decibels)}
+     */
+    public AtFrequency at(Frequency frequency) {
+        return new AtFrequency(this, Require.nonNull("frequency", frequency));
+    }
+
+    /** A run at one frequency, waiting for its target. Immutable. */
+    public static final class AtFrequency {
+        private final ToleranceStudy study;
+        private final Frequency frequency;
+
+        private AtFrequency(ToleranceStudy study, Frequency frequency) {
+            this.study = study;
+            this.frequency = frequency;
+        }
+
+        /**
+         * The target shielding effectiveness the samples are compared with.
+         *
+         * @param target the target, not null
+         * @return the run, with {@value #DEFAULT_SAMPLES} samples, seed 0 and no progress
+         *         reports until changed
+         */
+        public Run toMeet(Decibels target) {
+            Require.nonNull("target", target);
+            return new Run(study, frequency, target, DEFAULT_SAMPLES, 0L, ProgressListener.NONE);
+        }
+    }
+
+    /** The number of samples of a run unless {@link Run#samples(int)} says otherwise. */
+    public static final int DEFAULT_SAMPLES = 10_000;
+    /** The most samples of one run. */
+    public static final int MAX_SAMPLES = 100_000_000;
+
+    /**
+     * A run ready to go: change the sample count, the seed or the progress listener, then
+     * {@link #run()}. Immutable; each setting returns a new run.
+     */
+    public static final class Run {
+        private final ToleranceStudy study;
+        private final Frequency frequency;
+        private final Decibels target;
+        private final int samples;
+        private final long seed;
+        private final ProgressListener listener;
+
+        private Run(ToleranceStudy study, Frequency frequency, Decibels target, int samples, long seed,
+                    ProgressListener listener) {
+            this.study = study;
+            this.frequency = frequency;
+            this.target = target;
+            this.samples = samples;
+            this.seed = seed;
+            this.listener = listener;
+        }
+
+        /**
+         * The number of samples.
+         *
+         * @param count from 1 to {@value ToleranceStudy#MAX_SAMPLES}
+         * @return the run with this count
+         * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the count is out of range
+         */
+        public Run samples(int count) {
+            Require.inRange("number of samples", count, 1, MAX_SAMPLES, "samples");
+            return new Run(study, frequency, target, count, seed, listener);
+        }
+
+        /**
+         * The seed: the same seed and sample count give the same result, on any number of threads.
+         *
+         * @param value the seed
+         * @return the run with this seed
+         */
+        public Run seed(long value) {
+            return new Run(study, frequency, target, samples, value, listener);
+        }
+
+        /**
+         * Progress reports while the run goes on.
+         *
+         * @param progress the listener, not null
+         * @return the run with this listener
+         */
+        public Run reporting(ProgressListener progress) {
+            return new Run(study, frequency, target, samples, seed, Require.nonNull("progress listener", progress));
+        }
+
+        /**
+         * Runs the study.
+         *
+         * @return the distribution of SE
+         */
+        public ToleranceResult run() {
+            return study.run(frequency, target.toDb(), samples, seed, listener);
+        }
+    }
+
+    /**
      * Runs the study.
      *
      * @param frequency the frequency, not null
@@ -160,11 +267,11 @@ public final class ToleranceStudy {
      * @param listener  progress reports, not null ({@link ProgressListener#NONE} for none)
      * @return the distribution of SE
      */
-    public ToleranceResult run(Frequency frequency, double targetDb, int samples, long seed,
+    ToleranceResult run(Frequency frequency, double targetDb, int samples, long seed,
                                ProgressListener listener) {
         double hz = Require.nonNull("frequency", frequency).toHertz();
         Require.finite("target shielding effectiveness", targetDb, "dB");
-        Require.inRange("number of samples", samples, 1, 100_000_000, "samples");
+        Require.inRange("number of samples", samples, 1, MAX_SAMPLES, "samples");
         Require.nonNull("progress listener", listener);
         double nominal = barrier.facing(field).shieldingEffectivenessDb(hz);
         double[] values = new double[samples];

@@ -42,6 +42,92 @@ public final class TwoLayerAdvice {
     }
 
     /**
+     * Starts the comparison of a conductive layer and a high-permeability layer:
+     *
+     * <pre>{@code
+     * TwoLayerAdvice.Advice a = TwoLayerAdvice.of(Layer.of(copper, mm(0.5)), Layer.of(nickelIron, mm(0.5)))
+     *         .facing(loop).meeting(need).saturatingAt(mT(750)).inShellOfDiameter(cm(5));
+     * }</pre>
+     *
+     * @param conductor the conductive layer, not null
+     * @param magnetic  the high-permeability layer, not null
+     * @return the question, to be given the field, the requirement, the saturation and the shell size
+     */
+    public static Question of(Layer conductor, Layer magnetic) {
+        return new Question(Require.nonNull("conductive layer", conductor),
+                Require.nonNull("high-permeability layer", magnetic), null, null, null);
+    }
+
+    /**
+     * Which order, asked a step at a time: {@link #facing(IncidentField)},
+     * {@link #meeting(Requirement)}, {@link #saturatingAt(MagneticFluxDensity)}, then
+     * {@link #inShellOfDiameter(Length)} answers. Immutable; each step returns a new question.
+     */
+    public static final class Question {
+        private final Layer conductor;
+        private final Layer magnetic;
+        private final IncidentField field;
+        private final Requirement requirement;
+        private final MagneticFluxDensity saturation;
+
+        private Question(Layer conductor, Layer magnetic, IncidentField field, Requirement requirement,
+                         MagneticFluxDensity saturation) {
+            this.conductor = conductor;
+            this.magnetic = magnetic;
+            this.field = field;
+            this.requirement = requirement;
+            this.saturation = saturation;
+        }
+
+        /**
+         * The incident field.
+         *
+         * @param incident the field, not null
+         * @return the question with this field
+         */
+        public Question facing(IncidentField incident) {
+            return new Question(conductor, magnetic, Require.nonNull("field", incident), requirement, saturation);
+        }
+
+        /**
+         * The requirement both orders are measured against.
+         *
+         * @param need the requirement, not null, not empty
+         * @return the question with this requirement
+         */
+        public Question meeting(Requirement need) {
+            return new Question(conductor, magnetic, field, Require.nonNull("requirement", need), saturation);
+        }
+
+        /**
+         * The high-permeability layer's saturation flux density.
+         *
+         * @param bs greater than 0, not null
+         * @return the question with this saturation
+         */
+        public Question saturatingAt(MagneticFluxDensity bs) {
+            return new Question(conductor, magnetic, field, requirement, Require.nonNull("saturation", bs));
+        }
+
+        /**
+         * Answers for layers that form an enclosure of this diameter (for the wall flux estimate).
+         *
+         * @param diameter the enclosure's diameter, not null
+         * @return the advice
+         * @throws IllegalStateException if the field, the requirement or the saturation has not been given
+         */
+        public Advice inShellOfDiameter(Length diameter) {
+            if (field == null || requirement == null || saturation == null) {
+                throw new IllegalStateException("the two-layer question needs "
+                        + (field == null ? "facing(field)" : requirement == null ? "meeting(requirement)"
+                        : "saturatingAt(flux density)") + " before inShellOfDiameter(diameter)");
+            }
+            return compare(conductor.medium(), conductor.thickness(), magnetic.medium(), magnetic.thickness(), field,
+                    requirement, saturation, diameter);
+        }
+    }
+
+    /**
      * Compares the two orders.
      *
      * @param conductor          the conductive layer's medium, not null
@@ -54,7 +140,7 @@ public final class TwoLayerAdvice {
      * @param shellDiameter      the diameter of the enclosure the layers form, for the flux estimate
      * @return the advice
      */
-    public static Advice compare(MediumSource conductor, Length conductorThickness, MediumSource magnetic,
+    static Advice compare(MediumSource conductor, Length conductorThickness, MediumSource magnetic,
                                  Length magneticThickness, IncidentField field, Requirement requirement,
                                  MagneticFluxDensity saturation, Length shellDiameter) {
         Require.nonNull("field", field);

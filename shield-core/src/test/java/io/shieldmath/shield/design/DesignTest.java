@@ -112,16 +112,16 @@ class DesignTest {
         List<Candidate> c = List.of(Candidate.of("brass", BRASS, 8530), Candidate.of("copper", COPPER, 8890),
                 Candidate.of("aluminium", ALUMINIUM, 2700));
         FrequencyBand band = FrequencyBand.at(MHz(1));
-        Ranking byMass = MaterialRanking.rank(c, PLANE, band, 150, mm(5), MaterialRanking.Criterion.AREAL_MASS);
+        Ranking byMass = MaterialRanking.rank(c, PLANE, band, io.shieldmath.shield.quantity.Decibels.of(150), mm(5), MaterialRanking.Criterion.AREAL_MASS);
         assertEquals(List.of("aluminium", "copper", "brass"),
                 byMass.ranked().stream().map(e -> e.candidate().name()).toList());
         assertEquals(1.16, byMass.ranked().get(0).arealMass(), 0.05);
         assertEquals(2.83, byMass.ranked().get(1).arealMass(), 0.1);
         assertEquals(5.86, byMass.ranked().get(2).arealMass(), 0.2);
-        Ranking byThickness = MaterialRanking.rank(c, PLANE, band, 150, mm(5), MaterialRanking.Criterion.THICKNESS);
+        Ranking byThickness = MaterialRanking.rank(c, PLANE, band, io.shieldmath.shield.quantity.Decibels.of(150), mm(5), MaterialRanking.Criterion.THICKNESS);
         assertEquals(List.of("copper", "aluminium", "brass"),
                 byThickness.ranked().stream().map(e -> e.candidate().name()).toList());
-        Ranking tooThin = MaterialRanking.rank(c, PLANE, band, 150, mm(0.4), MaterialRanking.Criterion.AREAL_MASS);
+        Ranking tooThin = MaterialRanking.rank(c, PLANE, band, io.shieldmath.shield.quantity.Decibels.of(150), mm(0.4), MaterialRanking.Criterion.AREAL_MASS);
         assertEquals(List.of("copper"), tooThin.ranked().stream().map(e -> e.candidate().name()).toList());
         assertEquals(2, tooThin.excluded().size());
     }
@@ -130,7 +130,7 @@ class DesignTest {
     void tiesAreBrokenByThicknessThenNameAndSaidSo() {
         List<Candidate> c = List.of(Candidate.of("copper B", COPPER, 8890).withCostPerSquareMetre(10),
                 Candidate.of("copper A", COPPER, 8890).withCostPerSquareMetre(10));
-        Ranking r = MaterialRanking.rank(c, PLANE, FrequencyBand.at(MHz(1)), 150, mm(5),
+        Ranking r = MaterialRanking.rank(c, PLANE, FrequencyBand.at(MHz(1)), io.shieldmath.shield.quantity.Decibels.of(150), mm(5),
                 MaterialRanking.Criterion.COST_PER_SQUARE_METRE);
         assertEquals("copper A", r.ranked().get(0).candidate().name());
         assertTrue(r.ranked().get(0).note().startsWith("tied with copper B on cost per m²"), r.ranked().get(0)::note);

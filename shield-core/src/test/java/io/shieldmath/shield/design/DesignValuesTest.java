@@ -216,7 +216,7 @@ class DesignValuesTest {
         FrequencyBand band = FrequencyBand.parse("1 MHz to 10 MHz");
         Length limit = Length.ofMillimetres(5);
         for (MaterialRanking.Criterion by : MaterialRanking.Criterion.values()) {
-            Ranking r = MaterialRanking.rank(List.of(cu), plane, band, 150, limit, by);
+            Ranking r = MaterialRanking.rank(List.of(cu), plane, band, io.shieldmath.shield.quantity.Decibels.of(150), limit, by);
             assertEquals(by, r.criterion());
             assertEquals(150, r.targetDb(), 0);
             Ranking.Entry e = r.ranked().get(0);
@@ -237,16 +237,16 @@ class DesignValuesTest {
         }
         Candidate bare = Candidate.of("bare", COPPER, 8890);
         assertEquals("candidate bare has no cost per kilogram; give one with withCostPerKilogram",
-                assertThrows(IllegalArgumentException.class, () -> MaterialRanking.rank(List.of(bare), plane, band, 150,
+                assertThrows(IllegalArgumentException.class, () -> MaterialRanking.rank(List.of(bare), plane, band, io.shieldmath.shield.quantity.Decibels.of(150),
                         limit, MaterialRanking.Criterion.COST_BY_MASS)).getMessage());
         assertEquals("candidate bare has no cost per square metre; give one with withCostPerSquareMetre",
-                assertThrows(IllegalArgumentException.class, () -> MaterialRanking.rank(List.of(bare), plane, band, 150,
+                assertThrows(IllegalArgumentException.class, () -> MaterialRanking.rank(List.of(bare), plane, band, io.shieldmath.shield.quantity.Decibels.of(150),
                         limit, MaterialRanking.Criterion.COST_PER_SQUARE_METRE)).getMessage());
         // Equal costs per m² tie: ordered by thickness, and the note says so.
         Candidate thin = Candidate.of("thin", COPPER, 8890).withCostPerSquareMetre(30);
         Candidate steelish = Candidate.of("weak", Medium.conductor("weak", Conductivity.ofMegasiemensPerMetre(1), 1),
                 8000).withCostPerSquareMetre(30);
-        Ranking tie = MaterialRanking.rank(List.of(steelish, thin), plane, band, 150, limit,
+        Ranking tie = MaterialRanking.rank(List.of(steelish, thin), plane, band, io.shieldmath.shield.quantity.Decibels.of(150), limit,
                 MaterialRanking.Criterion.COST_PER_SQUARE_METRE);
         assertEquals("thin", tie.ranked().get(0).candidate().name());
         assertEquals(2, tie.ranked().get(1).rank());
@@ -254,11 +254,11 @@ class DesignValuesTest {
                 tie.ranked().get(0).note());
         assertTrue(tie.ranked().get(0).toString().endsWith(" (tied with weak on cost per m² (30.0000 per m²); "
                 + "ordered by thickness, then name)"));
-        Ranking notTied = MaterialRanking.rank(List.of(steelish, thin), plane, band, 150, limit,
+        Ranking notTied = MaterialRanking.rank(List.of(steelish, thin), plane, band, io.shieldmath.shield.quantity.Decibels.of(150), limit,
                 MaterialRanking.Criterion.THICKNESS);
         assertEquals("", notTied.ranked().get(0).note());
         // An unreachable target excludes the candidate with the solver's explanation.
-        Ranking none = MaterialRanking.rank(List.of(steelish), plane, band, 5000, limit,
+        Ranking none = MaterialRanking.rank(List.of(steelish), plane, band, io.shieldmath.shield.quantity.Decibels.of(5000), limit,
                 MaterialRanking.Criterion.THICKNESS);
         assertEquals(List.of(), none.ranked());
         assertEquals(1, none.excluded().size());
