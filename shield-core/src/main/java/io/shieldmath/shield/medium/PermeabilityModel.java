@@ -85,10 +85,10 @@ public interface PermeabilityModel {
      * µ'' = µdc·x/(1 + x²) with x = f/fc. At fc the magnitude has fallen by √2; far
      * above fc it falls as fc/f.
      *
-     * @param muDc   the low-frequency permeability µdc, finite and 1 or more
-     * @param corner the corner frequency fc, not null
+     * @param muDc   the low-frequency permeability µdc, from 1 to 1e7
+     * @param corner the corner frequency fc, not null, from 1 µHz to 10 THz
      * @return the model
-     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µdc is out of range
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µdc or the corner is out of range
      */
     static PermeabilityModel relaxation(double muDc, Frequency corner) {
         return new RelaxationPermeability(muDc, Require.nonNull("corner frequency", corner));
@@ -98,13 +98,14 @@ public interface PermeabilityModel {
      * A table of measured µ' and µ'' against frequency, interpolated linearly in both
      * parts against log10(f), held at the first and last points outside the table.
      *
-     * @param hertz the frequencies in Hz, finite, greater than 0 and strictly increasing; at least one
-     * @param real  µ' at each frequency, finite and greater than 0
-     * @param loss  µ'' at each frequency, finite and 0 or more
+     * @param hertz the frequencies in Hz, finite, greater than 0 and strictly increasing; 1 to
+     *              100 000 of them
+     * @param real  µ' at each frequency, greater than 0 and at most 1e7
+     * @param loss  µ'' at each frequency, from 0 to 1e7
      * @return the model (the arrays are copied)
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a value is out of range or the
      *                                  frequencies do not increase
-     * @throws IllegalArgumentException if the arrays differ in length or are empty
+     * @throws IllegalArgumentException if the arrays differ in length, are empty or too long
      */
     static PermeabilityModel table(double[] hertz, double[] real, double[] loss) {
         return new TabulatedPermeability(hertz, real, loss);

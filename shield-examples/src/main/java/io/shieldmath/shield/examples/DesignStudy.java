@@ -177,7 +177,7 @@ public final class DesignStudy {
         double mass = 0;
         for (DesignLayer l : layers) {
             if (l.material().isPresent()) {
-                mass += l.material().get().arealMass(l.thickness()) * PLATE_AREA_M2 * 1000;
+                mass += l.material().get().arealMass(l.thickness()).toKilogramsPerSquareMetre() * PLATE_AREA_M2 * 1000;
             }
         }
         return new Evaluated(name, kind, mass, need.marginOf(model), "the plate (edges ignored)", layers,
@@ -195,7 +195,7 @@ public final class DesignStudy {
         double mass = 0;
         for (DesignLayer l : wallSourceSideFirst) {
             if (l.material().isPresent()) {
-                mass += l.material().get().arealMass(l.thickness()) * area * 1000;
+                mass += l.material().get().arealMass(l.thickness()).toKilogramsPerSquareMetre() * area * 1000;
             }
         }
         return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(model, sweepHz), shell);

@@ -4,6 +4,7 @@
 package io.shieldmath.shield.materials;
 
 import io.shieldmath.shield.quantity.Conductivity;
+import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.internal.Require;
 import java.io.IOException;
 import java.io.InputStream;

@@ -119,7 +119,7 @@ public final class CatalogueTable {
                 cells.add(text + ref(sources, m, MaterialProperty.CONDUCTIVITY));
             }
             cells.add(m.temperatureCoefficient().isPresent()
-                    ? digits(m.temperatureCoefficient().getAsDouble(), 4)
+                    ? digits(m.temperatureCoefficient().get().toPerKelvin(), 4)
                     + ref(sources, m, MaterialProperty.TEMPERATURE_COEFFICIENT) : "—");
             cells.add(model(m.permeability()) + ref(sources, m, MaterialProperty.PERMEABILITY));
             PermeabilityModel p = m.permeability();

@@ -4,6 +4,7 @@
 package io.shieldmath.shield.materials;
 
 import io.shieldmath.shield.field.FieldKind;
+import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.ConstantPermeability;
@@ -13,14 +14,16 @@ import io.shieldmath.shield.medium.RelaxationPermeability;
 import io.shieldmath.shield.medium.TabulatedPermeability;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.quantity.Conductivity;
+import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
-import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import io.shieldmath.shield.quantity.RelativePermeability;
 import io.shieldmath.shield.quantity.RelativePermittivity;
 import io.shieldmath.shield.quantity.SheetResistance;
+import io.shieldmath.shield.quantity.Temperature;
+import io.shieldmath.shield.quantity.TemperatureCoefficient;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -29,8 +32,6 @@ import java.util.Set;
 import java.util.function.BiFunction;
 import java.util.function.Function;
 import java.util.function.Supplier;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
@@ -62,9 +63,6 @@ final class Json {
     private static final Set<String> MEDIUM_FIELDS = Set.of("name", "conductivity", "permeability", "permittivity");
     private static final Set<String> FIELD_FIELDS = Set.of("kind", "distance", "impedance");
     private static final Set<String> POINT_FIELDS = Set.of("frequency", "real", "loss");
-
-    private static final Pattern NUMBER_UNIT =
-            Pattern.compile("\\s*([+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\\s*(.*?)\\s*");
 
     private Json() {
     }
@@ -113,7 +111,8 @@ final class Json {
             String src = source(v);
             at(sheet, () -> b.sheetResistance(rs, t, src));
         }
-        valued(f, "temperatureCoefficient", false, Json::perKelvin, "0.00393 /K", b::temperatureCoefficient);
+        valued(f, "temperatureCoefficient", false, TemperatureCoefficient::parse, "0.00393 /K",
+                b::temperatureCoefficient);
         Node mu = f.required("permeability");
         PermeabilityModel model = readPermeability(mu, true);
         String muSource = source(new Node.Fields(mu));
@@ -123,7 +122,7 @@ final class Json {
         RelativePermittivity epsilon = permittivity(ev.required("value"));
         String epsSource = source(ev);
         at(eps, () -> b.permittivity(epsilon, epsSource));
-        valued(f, "density", true, Density::parse, "8890 kg/m3", b::density);
+        valued(f, "density", true, Density::parse, "8890 kg/m³", b::density);
         valued(f, "saturation", false, MagneticFluxDensity::parse, "0.75 T", b::saturation);
         Node note = f.optional("note");
         if (note != null) {
@@ -167,7 +166,7 @@ final class Json {
 
     private static RelativePermittivity permittivity(Node n) {
         double v = n.number();
-        return n.convert(x -> RelativePermittivity.of(Double.parseDouble(x)), Double.toString(v));
+        return n.convert(x -> RelativePermittivity.of(v), n.text);
     }
 
     static PermeabilityModel readPermeability(Node n, boolean withSource) {
@@ -213,51 +212,6 @@ final class Json {
         }
     }
 
-    /** Reads a temperature coefficient such as {@code "0.00393 /K"} into 1/K. */
-    static double perKelvin(String text) {
-        Matcher m = NUMBER_UNIT.matcher(text.replace('\u2212', '-'));
-        String expected = "a number and a unit such as \"0.00393 /K\"; units: /K, 1/K, /°C, ppm/K";
-        if (!m.matches()) {
-            throw InvalidQuantityException.unreadable("temperature coefficient", text, "no decimal number at the start",
-                    expected);
-        }
-        double v = Double.parseDouble(m.group(1));
-        switch (m.group(2).replace(" ", "")) {
-            case "/K":
-            case "1/K":
-            case "K^-1":
-            case "/°C":
-            case "1/°C":
-                return v;
-            case "ppm/K":
-            case "ppm/°C":
-                return v * 1e-6;
-            case "":
-                throw InvalidQuantityException.unreadable("temperature coefficient", text, "no unit", expected);
-            default:
-                throw InvalidQuantityException.unreadable("temperature coefficient", text,
-                        "unknown unit \"" + m.group(2) + "\"", expected);
-        }
-    }
-
-    /** Reads a temperature such as {@code "60 °C"} into °C. */
-    static double celsius(String text) {
-        Matcher m = NUMBER_UNIT.matcher(text.replace('\u2212', '-'));
-        String expected = "a number and a unit such as \"60 °C\"; units: °C, degC";
-        if (!m.matches()) {
-            throw InvalidQuantityException.unreadable("temperature", text, "no decimal number at the start", expected);
-        }
-        String unit = m.group(2).replace(" ", "");
-        if (unit.isEmpty()) {
-            throw InvalidQuantityException.unreadable("temperature", text, "no unit", expected);
-        }
-        if (!unit.equals("°C") && !unit.equals("degC")) {
-            throw InvalidQuantityException.unreadable("temperature", text, "unknown unit \"" + m.group(2) + "\"",
-                    expected);
-        }
-        return Double.parseDouble(m.group(1));
-    }
-
     static String writeCatalogue(Catalogue c) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", CATALOGUE_FORMAT);
@@ -281,7 +235,7 @@ final class Json {
             valued(o, "conductivity", text(m.conductivity()), m, MaterialProperty.CONDUCTIVITY);
         }
         if (m.temperatureCoefficient().isPresent()) {
-            valued(o, "temperatureCoefficient", Density.plain(m.temperatureCoefficient().getAsDouble()) + " /K", m,
+            valued(o, "temperatureCoefficient", text(m.temperatureCoefficient().get()), m,
                     MaterialProperty.TEMPERATURE_COEFFICIENT);
         }
         ObjectNode mu = o.putObject("permeability");
@@ -290,7 +244,7 @@ final class Json {
         ObjectNode eps = o.putObject("permittivity");
         number(eps, "value", m.permittivity().value());
         eps.put("source", m.source(MaterialProperty.PERMITTIVITY).get());
-        valued(o, "density", m.density().toString(), m, MaterialProperty.DENSITY);
+        valued(o, "density", text(m.density()), m, MaterialProperty.DENSITY);
         if (m.saturation().isPresent()) {
             valued(o, "saturation", text(m.saturation().get()), m, MaterialProperty.SATURATION);
         }
@@ -348,7 +302,7 @@ final class Json {
         } catch (IllegalArgumentException e) {
             // fall through to the SI form
         }
-        return Double.toString(si) + " " + siUnit;
+        return Text.exact(si) + " " + siUnit;
     }
 
     static String text(Conductivity c) {
@@ -369,6 +323,18 @@ final class Json {
 
     static String text(MagneticFluxDensity b) {
         return exact(b, MagneticFluxDensity::parse, b.toTesla(), "T");
+    }
+
+    static String text(Density d) {
+        return exact(d, Density::parse, d.toKilogramsPerCubicMetre(), "kg/m³");
+    }
+
+    static String text(TemperatureCoefficient a) {
+        return exact(a, TemperatureCoefficient::parse, a.toPerKelvin(), "/K");
+    }
+
+    static String text(Temperature t) {
+        return exact(t, Temperature::parse, t.toCelsius(), "°C");
     }
 
     // ================================================================ design
@@ -429,7 +395,7 @@ final class Json {
         if (temp == null) {
             return at(where, () -> DesignLayer.of(m, t));
         }
-        double c = temp.quantity(Json::celsius, "60 °C");
+        Temperature c = temp.quantity(Temperature::parse, "60 °C");
         return at(temp, () -> DesignLayer.of(m, t, c));
     }
 
@@ -507,7 +473,7 @@ final class Json {
                     o.put("material", l.material().get().id());
                     o.put("thickness", text(l.thickness()));
                     if (l.temperature().isPresent()) {
-                        o.put("temperature", Density.plain(l.temperature().getAsDouble()) + " °C");
+                        o.put("temperature", text(l.temperature().get()));
                     }
             }
         }

@@ -3,6 +3,8 @@
  */
 package io.shieldmath.shield.materials;
 
+import io.shieldmath.shield.internal.Text;
+import io.shieldmath.shield.quantity.InvalidQuantityException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.Reader;
@@ -263,21 +265,19 @@ final class Node {
         }
     }
 
-    /** A plain number, or a text value holding one. */
+    /**
+     * A plain number, or a text value holding one, read by the one number grammar of the
+     * core ({@code Text.parseNumber}): a number that overflows or underflows to 0 is refused.
+     */
     double number() {
         if (type != Type.NUMBER && type != Type.STRING) {
             throw error("expected a number, found " + type.words);
         }
-        double v;
         try {
-            v = Double.parseDouble(text.strip());
-        } catch (NumberFormatException e) {
-            throw error("not a number: \"" + text + "\"");
+            return Text.parseNumber("number", text, "a decimal number such as 2.1");
+        } catch (InvalidQuantityException e) {
+            throw error(e.getMessage(), e);
         }
-        if (!Double.isFinite(v) || text.strip().matches(".*[^0-9eE.+\\-].*")) {
-            throw error("not a finite decimal number: \"" + text + "\"");
-        }
-        return v;
     }
 
     int integer(int min, int max) {

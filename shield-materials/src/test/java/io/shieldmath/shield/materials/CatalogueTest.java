@@ -9,6 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import io.shieldmath.shield.quantity.TemperatureCoefficient;
+import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.quantity.Conductivity;
 import java.io.IOException;
@@ -100,7 +102,7 @@ class CatalogueTest {
         Material base = cat.get("nickel-iron-80");
         Material ours = Material.builder("nickel-iron-80", "Our 80 % nickel-iron, as measured")
                 .conductivity(Conductivity.ofMegasiemensPerMetre(1.6), "our four-point-probe measurement")
-                .temperatureCoefficient(0.001, "from memory")
+                .temperatureCoefficient(TemperatureCoefficient.ofPerKelvin(0.001), "from memory")
                 .permeability(io.shieldmath.shield.medium.PermeabilityModel.relaxation(40_000,
                         io.shieldmath.shield.quantity.Frequency.ofHertz(800)), "our permeameter")
                 .permittivity(io.shieldmath.shield.quantity.RelativePermittivity.ONE, "common practice, no source")
@@ -109,7 +111,7 @@ class CatalogueTest {
                 .build();
         Material extra = Material.builder("our-foil", "Our foil")
                 .conductivity(Conductivity.ofMegasiemensPerMetre(30), "invented for this test")
-                .temperatureCoefficient(0.004, "invented for this test")
+                .temperatureCoefficient(TemperatureCoefficient.ofPerKelvin(0.004), "invented for this test")
                 .permeability(ConstantPermeability.ONE, "invented for this test")
                 .permittivity(io.shieldmath.shield.quantity.RelativePermittivity.ONE, "invented for this test")
                 .density(Density.ofKilogramsPerCubicMetre(2700), "invented for this test").build();

@@ -143,7 +143,7 @@ class MaterialFileTest {
         assertEquals(FrequencyBand.parse("10 Hz to 100 kHz"), d.band());
         Barrier expected = Barrier.of(cat.get("copper-annealed"), Length.ofMillimetres(0.3))
                 .thenGap(Length.ofMillimetres(2))
-                .then(cat.get("nickel-iron-80").atTemperature(40), Length.ofMillimetres(0.5))
+                .then(cat.get("nickel-iron-80").atTemperature(io.shieldmath.shield.quantity.Temperature.ofCelsius(40)), Length.ofMillimetres(0.5))
                 .then(cat.get("paint-nickel"), Length.ofMicrometres(50));
         assertEquals(expected, d.barrier());
         assertEquals(41, d.sweep().size());
