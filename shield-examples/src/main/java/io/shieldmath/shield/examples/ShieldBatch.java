@@ -9,6 +9,7 @@ import io.shieldmath.shield.materials.MaterialFileException;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.FrequencyUnit;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import java.io.BufferedReader;
@@ -219,11 +220,7 @@ public final class ShieldBatch {
                 continue;
             }
             try {
-                if (s.matches("[+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?")) {
-                    list.add(Frequency.ofHertz(Double.parseDouble(s)).toHertz());
-                } else {
-                    list.add(Frequency.parse(s).toHertz());
-                }
+                list.add(Frequency.parse(s, FrequencyUnit.HERTZ).toHertz());
             } catch (InvalidQuantityException e) {
                 throw new BadLine(n, e.getMessage());
             }
