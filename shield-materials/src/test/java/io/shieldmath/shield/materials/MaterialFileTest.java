@@ -118,7 +118,7 @@ class MaterialFileTest {
             big.append("1,");
         }
         big.append("1]}");
-        assertTrue(refused(big.toString()).problem().contains("not valid JSON"));
+        assertTrue(refused(big.toString()).problem().contains("longer than 4000000 characters"));
     }
 
     @Test
