@@ -396,7 +396,9 @@ final class Json {
             return at(where, () -> DesignLayer.of(m, t));
         }
         Temperature c = temp.quantity(Temperature::parse, "60 °C");
-        return at(temp, () -> DesignLayer.of(m, t, c));
+        // The temperature's range is checked at the temperature, the thickness's at the thickness.
+        at(temp, () -> m.atTemperature(c));
+        return at(where, () -> DesignLayer.of(m, t, c));
     }
 
     private static Medium readMedium(Node n) {
