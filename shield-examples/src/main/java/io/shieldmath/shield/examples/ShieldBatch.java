@@ -4,8 +4,10 @@
 package io.shieldmath.shield.examples;
 
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.materials.Design;
-import io.shieldmath.shield.materials.MaterialFileException;
+import io.shieldmath.shield.materials.files.CatalogueFile;
+import io.shieldmath.shield.materials.files.Design;
+import io.shieldmath.shield.materials.files.DesignFile;
+import io.shieldmath.shield.materials.files.MaterialFileException;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
@@ -121,9 +123,9 @@ public final class ShieldBatch {
         try {
             Catalogue catalogue = Catalogue.builtIn();
             if (catalogueFile != null) {
-                catalogue = catalogue.extendedWith(Catalogue.read(Paths.get(catalogueFile)));
+                catalogue = catalogue.extendedWith(CatalogueFile.read(Paths.get(catalogueFile)));
             }
-            design = Design.read(Paths.get(designFile), catalogue);
+            design = DesignFile.read(Paths.get(designFile), catalogue);
         } catch (MaterialFileException e) {
             err.println("shield-batch: bad file: " + e.getMessage());
             return BAD_INPUT;

@@ -122,34 +122,24 @@ public final class Material implements MediumSource {
      * @throws IllegalArgumentException if the id or name is not acceptable
      */
     public static Builder builder(String id, String name) {
-        return new Builder(checkId(id), checkText("material name", name, 200));
+        return new Builder(checkId(id), Require.text("material name", name, 200));
     }
 
     /**
-     * Checks an identifier.
+     * Checks an identifier of a material.
      *
-     * @param id the identifier
+     * @param id the identifier, not null
      * @return the identifier
      * @throws IllegalArgumentException if it is not lowercase kebab case of at most 64 characters
      */
-    static String checkId(String id) {
+    public static String checkId(String id) {
         Require.nonNull("material id", id);
         if (id.length() > 64 || !ID.matcher(id).matches()) {
-            throw new IllegalArgumentException("material id \"" + id + "\" is not acceptable; allowed: lowercase "
+            throw new IllegalArgumentException("material id \"" + Text.clip(id) + "\" is not acceptable; allowed: lowercase "
                     + "letters and digits in words joined by single hyphens, at most 64 characters, such as "
                     + "\"copper-annealed\"");
         }
         return id;
-    }
-
-    static String checkText(String what, String text, int max) {
-        Require.nonNull(what, text);
-        String s = text.strip();
-        if (s.isEmpty() || s.length() > max || s.chars().anyMatch(Character::isISOControl)) {
-            throw new IllegalArgumentException(what + " must be 1 to " + max
-                    + " characters without control characters; got \"" + text + "\"");
-        }
-        return s;
     }
 
     /**
@@ -399,7 +389,7 @@ public final class Material implements MediumSource {
         }
 
         private void source(MaterialProperty p, String source) {
-            sources.put(p, checkText(id + " " + p.key() + " source", source, 1000));
+            sources.put(p, Require.text(id + " " + p.key() + " source", source, 1000));
         }
 
         /**
@@ -520,7 +510,7 @@ public final class Material implements MediumSource {
          * @return this builder
          */
         public Builder note(String text) {
-            this.note = checkText(id + " note", text, 1000);
+            this.note = Require.text(id + " note", text, 1000);
             return this;
         }
 

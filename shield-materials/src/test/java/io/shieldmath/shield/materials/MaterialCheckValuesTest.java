@@ -10,6 +10,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import io.shieldmath.shield.field.ImpedanceForm;
+import io.shieldmath.shield.materials.files.DesignLayer;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.planar.Barrier;

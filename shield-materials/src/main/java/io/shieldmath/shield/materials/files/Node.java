@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
 
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.quantity.InvalidQuantityException;

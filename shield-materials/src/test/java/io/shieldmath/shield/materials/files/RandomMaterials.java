@@ -1,7 +1,11 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
+
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Material;
+import io.shieldmath.shield.materials.MaterialProperty;
 
 import io.shieldmath.shield.quantity.Temperature;
 import io.shieldmath.shield.quantity.TemperatureCoefficient;

@@ -1,7 +1,11 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
+
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Material;
+import io.shieldmath.shield.materials.MaterialProperty;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -54,11 +58,11 @@ class FileHardeningTest {
             "}");
 
     private static MaterialFileException refused(String json) {
-        return assertThrows(MaterialFileException.class, () -> Catalogue.parse(json), json);
+        return assertThrows(MaterialFileException.class, () -> CatalogueFile.parse(json), json);
     }
 
     private static MaterialFileException refusedDesign(String json) {
-        return assertThrows(MaterialFileException.class, () -> Design.parse(json, Catalogue.empty()), json);
+        return assertThrows(MaterialFileException.class, () -> DesignFile.parse(json, Catalogue.empty()), json);
     }
 
     private static String foil(String from, String to) {
@@ -73,8 +77,8 @@ class FileHardeningTest {
 
     @Test
     void theFixturesAreValid() {
-        assertEquals(Density.ofKilogramsPerCubicMetre(2700), Catalogue.parse(FOIL).get("our-foil").density());
-        assertEquals(1, Design.parse(DESIGN, Catalogue.empty()).layers().size());
+        assertEquals(Density.ofKilogramsPerCubicMetre(2700), CatalogueFile.parse(FOIL).get("our-foil").density());
+        assertEquals(1, DesignFile.parse(DESIGN, Catalogue.empty()).layers().size());
     }
 
     // ---- 1 and 2: the core grammar in files ----
@@ -132,7 +136,7 @@ class FileHardeningTest {
 
     @Test
     void longRunsInsideValuesAreReadOrRefusedAtOnce() {
-        Material m = Catalogue.parse(foil("\"2700 kg/m3\"", "\"2700" + " ".repeat(200) + "kg/m3\""))
+        Material m = CatalogueFile.parse(foil("\"2700 kg/m3\"", "\"2700" + " ".repeat(200) + "kg/m3\""))
                 .get("our-foil");
         assertEquals(Density.ofKilogramsPerCubicMetre(2700), m.density());
         MaterialFileException e = refused(foil("\"2700 kg/m3\"", "\"2700" + " ".repeat(99_000) + "kg/m3\""));
@@ -149,7 +153,7 @@ class FileHardeningTest {
     void aBareDensitySaysNoUnitAndNoBreakSpacesAreRead() {
         MaterialFileException e = refused(foil("\"2700 kg/m3\"", "\"8700\""));
         assertTrue(e.problem().contains("(no unit)"), e.getMessage());
-        Material m = Catalogue.parse(foil("\"0.004 /K\"", "\"0.004\u00a0/K\"")).get("our-foil");
+        Material m = CatalogueFile.parse(foil("\"0.004 /K\"", "\"0.004\u00a0/K\"")).get("our-foil");
         assertEquals(TemperatureCoefficient.ofPerKelvin(0.004), m.temperatureCoefficient().orElseThrow());
     }
 
@@ -162,15 +166,15 @@ class FileHardeningTest {
         for (Charset cs : new Charset[] {StandardCharsets.UTF_8, StandardCharsets.UTF_16BE, StandardCharsets.UTF_16LE,
             Charset.forName("UTF-32BE")}) {
             MaterialFileException fromStream = assertThrows(MaterialFileException.class,
-                    () -> Catalogue.read(new ByteArrayInputStream(doc.getBytes(cs))));
+                    () -> CatalogueFile.read(new ByteArrayInputStream(doc.getBytes(cs))));
             assertEquals(fromString.getMessage(), fromStream.getMessage(), cs.name());
         }
         // "      \"name\": \"µµµ Ω°\", \"colour\": " is 34 characters (each µ, Ω and ° one character).
         assertEquals(35, fromString.column());
         // A byte-order mark is skipped in both.
-        assertEquals(Catalogue.parse(FOIL), Catalogue.parse("\ufeff" + FOIL));
+        assertEquals(CatalogueFile.parse(FOIL), CatalogueFile.parse("\ufeff" + FOIL));
         byte[] bom = ("\ufeff" + FOIL).getBytes(StandardCharsets.UTF_8);
-        assertEquals(Catalogue.parse(FOIL), Catalogue.read(new ByteArrayInputStream(bom)));
+        assertEquals(CatalogueFile.parse(FOIL), CatalogueFile.read(new ByteArrayInputStream(bom)));
     }
 
     @Test
@@ -187,14 +191,14 @@ class FileHardeningTest {
                 > Node.MAX_DOCUMENT_CHARS);
         MaterialFileException s = refused(wide);
         MaterialFileException f = assertThrows(MaterialFileException.class,
-                () -> Catalogue.read(new ByteArrayInputStream(wide.getBytes(StandardCharsets.UTF_8))));
+                () -> CatalogueFile.read(new ByteArrayInputStream(wide.getBytes(StandardCharsets.UTF_8))));
         assertEquals(s.getMessage(), f.getMessage());
         assertTrue(s.problem().contains("expected an object"), s.getMessage());
         // One character over the limit: refused by both, with the same words.
         String over = "[" + " ".repeat((int) Node.MAX_DOCUMENT_CHARS - 1) + "]";
         MaterialFileException so = refused(over);
         MaterialFileException fo = assertThrows(MaterialFileException.class,
-                () -> Catalogue.read(new ByteArrayInputStream(over.getBytes(StandardCharsets.UTF_8))));
+                () -> CatalogueFile.read(new ByteArrayInputStream(over.getBytes(StandardCharsets.UTF_8))));
         assertEquals(so.getMessage(), fo.getMessage());
         assertTrue(so.problem().contains("longer than 4000000 characters"), so.getMessage());
     }
@@ -206,7 +210,7 @@ class FileHardeningTest {
         int at = FOIL.indexOf("Our foil") + 1;
         bad[at] = (byte) 0xc3;       // a lead byte followed by an ASCII byte: malformed UTF-8
         MaterialFileException e = assertThrows(MaterialFileException.class,
-                () -> Catalogue.read(new ByteArrayInputStream(bad)));
+                () -> CatalogueFile.read(new ByteArrayInputStream(bad)));
         assertEquals(7, e.line());
         assertTrue(e.problem().contains("malformed UTF-8"), e.getMessage());
     }

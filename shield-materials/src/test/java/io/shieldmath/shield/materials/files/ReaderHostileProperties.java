@@ -1,7 +1,11 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
+
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Material;
+import io.shieldmath.shield.materials.MaterialProperty;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -171,7 +175,7 @@ class ReaderHostileProperties {
             }
             String doc = fill(slot.design() ? DESIGN : CATALOGUE, slot, text);
             try {
-                Object read = slot.design() ? Design.parse(doc, cat) : Catalogue.parse(doc);
+                Object read = slot.design() ? DesignFile.parse(doc, cat) : CatalogueFile.parse(doc);
                 assertTrue(core != null, () -> "the reader accepted \"" + text + "\", which the core refuses");
                 assertEquals(core, slot.read().apply(read), text);
             } catch (MaterialFileException e) {

@@ -1,7 +1,9 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
+
+import io.shieldmath.shield.materials.Material;
 
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.planar.Layer;
