@@ -162,7 +162,7 @@ public final class Medium implements MediumSource {
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the medium does not conduct
      */
     public Length skinDepth(Frequency frequency) {
-        return permeability.skinDepth(frequency, conductivity.toSiemensPerMetre());
+        return permeability.skinDepth(frequency, conductivity);
     }
 
     /**

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.medium;
 
+import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.RelativePermeability;
@@ -116,13 +117,15 @@ public interface PermeabilityModel {
      * good conductors (where the propagation constant is (1+j)/δ).
      *
      * @param frequency    the frequency, not null
-     * @param conductivity σ in S/m, greater than 0
+     * @param conductivity σ, not null, greater than 0
      * @return δ
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if σ is zero
      */
-    default Length skinDepth(Frequency frequency, double conductivity) {
+    default Length skinDepth(Frequency frequency, Conductivity conductivity) {
         double f = Require.nonNull("frequency", frequency).toHertz();
-        Require.positive("conductivity", conductivity, "S/m");
+        double sigma = Require.positive("conductivity", Require.nonNull("conductivity", conductivity)
+                .toSiemensPerMetre(), "S/m");
         double mu = Math.hypot(real(f), loss(f)) * io.shieldmath.shield.quantity.PhysicalConstants.MU_0;
-        return Length.ofMetres(1 / Math.sqrt(Math.PI * f * mu * conductivity));
+        return Length.ofMetres(1 / Math.sqrt(Math.PI * f * mu * sigma));
     }
 }

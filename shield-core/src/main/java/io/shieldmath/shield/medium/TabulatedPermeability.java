@@ -69,9 +69,9 @@ public final class TabulatedPermeability implements PermeabilityModel {
     /**
      * The table's frequencies in Hz.
      *
-     * @return a copy of the frequencies
+     * @return a copy of the frequencies in Hz
      */
-    public double[] frequencies() {
+    public double[] hertz() {
         return hertz.clone();
     }
 
@@ -94,13 +94,13 @@ public final class TabulatedPermeability implements PermeabilityModel {
     }
 
     @Override
-    public double real(double f) {
-        return interpolate(real, f);
+    public double real(double hertz) {
+        return interpolate(real, hertz);
     }
 
     @Override
-    public double loss(double f) {
-        return interpolate(loss, f);
+    public double loss(double hertz) {
+        return interpolate(loss, hertz);
     }
 
     private double interpolate(double[] values, double f) {

@@ -75,11 +75,11 @@ class MediumTest {
         assertEquals(100, t.real(1e9), 0);
         assertEquals(50, t.loss(1e9), 0);
         assertEquals(3000 - 2900 * 0.5, t.real(1e5), 1e-9);   // second interval
-        assertArrayEquals(new double[] {100, 10_000, 1e6}, t.frequencies());
+        assertArrayEquals(new double[] {100, 10_000, 1e6}, t.hertz());
         assertArrayEquals(new double[] {5000, 3000, 100}, t.realParts());
         assertArrayEquals(new double[] {0, 1000, 50}, t.lossParts());
-        t.frequencies()[0] = 7;                      // copies, not views
-        assertEquals(100, t.frequencies()[0], 0);
+        t.hertz()[0] = 7;                      // copies, not views
+        assertEquals(100, t.hertz()[0], 0);
         assertEquals("µr table of 3 points, 100 Hz to 1 MHz", t.toString());
 
         double[] f = {100, 200};

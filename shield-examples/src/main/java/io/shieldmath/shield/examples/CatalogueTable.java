@@ -154,7 +154,7 @@ public final class CatalogueTable {
             return "relaxation, µdc " + digits(r.lowFrequencyValue(), 6) + ", fc " + r.corner();
         }
         if (p instanceof TabulatedPermeability t) {
-            double[] hz = t.frequencies();
+            double[] hz = t.hertz();
             return "table of " + hz.length + " points";
         }
         return p.toString();

@@ -159,7 +159,7 @@ final class JsonValues {
         } else if (model instanceof TabulatedPermeability t) {
             o.put("model", "table");
             ArrayNode pts = o.putArray("points");
-            double[] hz = t.frequencies();
+            double[] hz = t.hertz();
             double[] re = t.realParts();
             double[] im = t.lossParts();
             for (int i = 0; i < hz.length; i++) {
