@@ -152,12 +152,12 @@ class MediumTest {
         // |µr| = 5 for µr = 3 − j4.
         PermeabilityModel lossy = PermeabilityModel.constant(RelativePermeability.ofComplex(3, 4));
         double d5 = 1 / Math.sqrt(Math.PI * 1e3 * 5 * MU0 * 1e6);
-        assertEquals(d5, lossy.skinDepth(Frequency.ofKilohertz(1), 1e6).toMetres(), d5 * 1e-12);
+        assertEquals(d5, lossy.skinDepth(Frequency.ofKilohertz(1), io.shieldmath.shield.quantity.Conductivity.ofSiemensPerMetre(1e6)).toMetres(), d5 * 1e-12);
         assertEquals("conductivity: 0 S/m is out of range; allowed: finite and greater than 0 S/m",
                 assertThrows(InvalidQuantityException.class,
-                        () -> lossy.skinDepth(Frequency.ofKilohertz(1), 0)).getMessage());
+                        () -> lossy.skinDepth(Frequency.ofKilohertz(1), io.shieldmath.shield.quantity.Conductivity.ZERO)).getMessage());
         assertThrows(InvalidQuantityException.class, () -> Medium.AIR.skinDepth(Frequency.ofKilohertz(1)));
-        assertThrows(NullPointerException.class, () -> lossy.skinDepth(null, 1));
+        assertThrows(NullPointerException.class, () -> lossy.skinDepth(null, io.shieldmath.shield.quantity.Conductivity.ofSiemensPerMetre(1)));
         assertThrows(NullPointerException.class, () -> lossy.at(null));
     }
 
