@@ -6,6 +6,7 @@ import static io.shieldmath.shield.quantity.Quantities.*;
 import io.shieldmath.shield.field.*;
 import io.shieldmath.shield.planar.*;
 import io.shieldmath.shield.materials.*;
+import io.shieldmath.shield.materials.files.*;
 
 var catalogue = Catalogue.builtIn();
 var loop = IncidentField.magneticNearField(cm(5), ImpedanceForm.EXACT_DIPOLE);

@@ -7,6 +7,7 @@ import io.shieldmath.shield.design.*;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.materials.*;
+import io.shieldmath.shield.materials.files.*;
 
 var copper = Catalogue.builtIn().get("copper-annealed");
 var band = FrequencyBand.of(kHz(10), kHz(100));

@@ -3,8 +3,9 @@
  */
 
 /**
- * shield-materials: the built-in material catalogue with the provenance of every number,
- * user catalogues and design files in documented JSON formats of this library's own,
+ * shield-materials: the built-in material catalogue with the provenance of every number
+ * ({@code io.shieldmath.shield.materials}), and the documented JSON formats of this
+ * library's own for catalogues and designs ({@code io.shieldmath.shield.materials.files}),
  * read with Jackson's streaming parser and validated strictly.
  */
 module io.shieldmath.shield.materials {
@@ -12,4 +13,5 @@ module io.shieldmath.shield.materials {
     requires tools.jackson.databind;
 
     exports io.shieldmath.shield.materials;
+    exports io.shieldmath.shield.materials.files;
 }

@@ -103,6 +103,27 @@ public final class Require {
     }
 
     /**
+     * Requires a short text without control characters, such as a name or a title.
+     *
+     * @param what the text's name for the message
+     * @param text the text
+     * @param max  the largest number of characters, after stripping
+     * @return the text, stripped
+     * @throws NullPointerException     if {@code text} is null, with the name in the message
+     * @throws IllegalArgumentException if the stripped text is empty, longer than {@code max}
+     *                                  or holds a control character; the message quotes it, clipped
+     */
+    public static String text(String what, String text, int max) {
+        nonNull(what, text);
+        String s = text.strip();
+        if (s.isEmpty() || s.length() > max || s.chars().anyMatch(Character::isISOControl)) {
+            throw new IllegalArgumentException(what + " must be 1 to " + max
+                    + " characters without control characters; got \"" + Text.clip(text) + "\"");
+        }
+        return s;
+    }
+
+    /**
      * A value and its unit for a message, such as {@code "0.001 m"}.
      *
      * @param value the value

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.medium;
 
+import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.quantity.RelativePermeability;
 
 /**
@@ -63,8 +64,14 @@ public final class ConstantPermeability implements PermeabilityModel {
         return value.hashCode();
     }
 
+    /**
+     * A description such as {@code "µr 25000"} or {@code "µr 1200 - j 800"}, the numbers to
+     * six significant digits.
+     *
+     * @return the description
+     */
     @Override
     public String toString() {
-        return "µr " + value;
+        return "µr " + Text.number(real) + (loss == 0 ? "" : " - j " + Text.number(loss));
     }
 }

@@ -9,6 +9,8 @@ import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.RelativePermeability;
 import io.shieldmath.shield.quantity.RelativePermittivity;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+import io.shieldmath.shield.quantity.ConductivityUnit;
 
 /**
  * A homogeneous, isotropic, linear medium: conductivity σ, relative permeability model
@@ -160,7 +162,7 @@ public final class Medium implements MediumSource {
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the medium does not conduct
      */
     public Length skinDepth(Frequency frequency) {
-        return permeability.skinDepth(frequency, conductivity.toSiemensPerMetre());
+        return permeability.skinDepth(frequency, conductivity);
     }
 
     /**
@@ -215,8 +217,18 @@ public final class Medium implements MediumSource {
                 + permittivity.hashCode();
     }
 
+    /**
+     * A description such as {@code "copper (σ 58 MS/m, µr 1, εr 1)"}, the numbers to six
+     * significant digits.
+     *
+     * @return the description
+     */
     @Override
     public String toString() {
-        return name + " (σ " + conductivity + ", " + permeability + ", εr " + permittivity + ")";
+        return name + " (σ " + Text.show(conductivity.toSiemensPerMetre(), CONDUCTIVITY_UNITS) + ", " + permeability
+                + ", εr " + Text.number(permittivity.value()) + ")";
     }
+
+    private static final io.shieldmath.shield.quantity.Unit[] CONDUCTIVITY_UNITS = {
+        ConductivityUnit.SIEMENS_PER_METRE, ConductivityUnit.MEGASIEMENS_PER_METRE};
 }

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.medium;
 
+import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.RelativePermeability;
@@ -85,10 +86,10 @@ public interface PermeabilityModel {
      * µ'' = µdc·x/(1 + x²) with x = f/fc. At fc the magnitude has fallen by √2; far
      * above fc it falls as fc/f.
      *
-     * @param muDc   the low-frequency permeability µdc, finite and 1 or more
-     * @param corner the corner frequency fc, not null
+     * @param muDc   the low-frequency permeability µdc, from 1 to 1e7
+     * @param corner the corner frequency fc, not null, from 1 µHz to 10 THz
      * @return the model
-     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µdc is out of range
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µdc or the corner is out of range
      */
     static PermeabilityModel relaxation(double muDc, Frequency corner) {
         return new RelaxationPermeability(muDc, Require.nonNull("corner frequency", corner));
@@ -98,13 +99,14 @@ public interface PermeabilityModel {
      * A table of measured µ' and µ'' against frequency, interpolated linearly in both
      * parts against log10(f), held at the first and last points outside the table.
      *
-     * @param hertz the frequencies in Hz, finite, greater than 0 and strictly increasing; at least one
-     * @param real  µ' at each frequency, finite and greater than 0
-     * @param loss  µ'' at each frequency, finite and 0 or more
+     * @param hertz the frequencies in Hz, finite, greater than 0 and strictly increasing; 1 to
+     *              100 000 of them
+     * @param real  µ' at each frequency, greater than 0 and at most 1e7
+     * @param loss  µ'' at each frequency, from 0 to 1e7
      * @return the model (the arrays are copied)
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a value is out of range or the
      *                                  frequencies do not increase
-     * @throws IllegalArgumentException if the arrays differ in length or are empty
+     * @throws IllegalArgumentException if the arrays differ in length, are empty or too long
      */
     static PermeabilityModel table(double[] hertz, double[] real, double[] loss) {
         return new TabulatedPermeability(hertz, real, loss);
@@ -115,13 +117,15 @@ public interface PermeabilityModel {
      * good conductors (where the propagation constant is (1+j)/δ).
      *
      * @param frequency    the frequency, not null
-     * @param conductivity σ in S/m, greater than 0
+     * @param conductivity σ, not null, greater than 0
      * @return δ
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if σ is zero
      */
-    default Length skinDepth(Frequency frequency, double conductivity) {
+    default Length skinDepth(Frequency frequency, Conductivity conductivity) {
         double f = Require.nonNull("frequency", frequency).toHertz();
-        Require.positive("conductivity", conductivity, "S/m");
+        double sigma = Require.positive("conductivity", Require.nonNull("conductivity", conductivity)
+                .toSiemensPerMetre(), "S/m");
         double mu = Math.hypot(real(f), loss(f)) * io.shieldmath.shield.quantity.PhysicalConstants.MU_0;
-        return Length.ofMetres(1 / Math.sqrt(Math.PI * f * mu * conductivity));
+        return Length.ofMetres(1 / Math.sqrt(Math.PI * f * mu * sigma));
     }
 }

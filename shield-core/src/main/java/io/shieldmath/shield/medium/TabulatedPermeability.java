@@ -4,16 +4,28 @@
 package io.shieldmath.shield.medium;
 
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
+import io.shieldmath.shield.quantity.FrequencyUnit;
+import io.shieldmath.shield.quantity.InvalidQuantityException;
+import io.shieldmath.shield.quantity.RelativePermeability;
 import java.util.Arrays;
 
 /**
  * A table of measured complex permeability against frequency. Between points, µ' and µ''
  * are interpolated linearly against log10(f); below the first point and at 0 Hz the
  * first point's values hold, above the last point the last point's values hold (so
- * give points up to the highest frequency you evaluate). Immutable and thread-safe;
- * equality is by value.
+ * give points up to the highest frequency you evaluate).
+ *
+ * <p>Ranges: 1 to {@value #MAX_POINTS} points; frequencies finite, greater than 0 and strictly
+ * increasing; at every point µ' greater than 0 and at most {@code RelativePermeability.MAX}
+ * (1e7), µ'' from 0 to 1e7, so every interpolated value is in range too.
+ *
+ * <p>Immutable and thread-safe; equality is by value.
  */
 public final class TabulatedPermeability implements PermeabilityModel {
+
+    /** The largest number of points in a table. */
+    public static final int MAX_POINTS = 100_000;
 
     private final double[] hertz;
     private final double[] logHertz;
@@ -33,14 +45,22 @@ public final class TabulatedPermeability implements PermeabilityModel {
         this.real = real.clone();
         this.loss = loss.clone();
         this.logHertz = new double[hertz.length];
+        if (hertz.length > MAX_POINTS) {
+            throw new IllegalArgumentException("permeability table: at most " + MAX_POINTS + " points; got "
+                    + hertz.length);
+        }
         for (int i = 0; i < hertz.length; i++) {
             Require.positive("permeability table frequency [" + i + "]", this.hertz[i], "Hz");
             Require.positive("permeability table real part [" + i + "]", this.real[i], "(relative)");
+            Require.inRange("permeability table real part [" + i + "]", this.real[i], 0, RelativePermeability.MAX,
+                    "(relative)");
             Require.nonNegative("permeability table loss part [" + i + "]", this.loss[i], "(relative)");
+            Require.inRange("permeability table loss part [" + i + "]", this.loss[i], 0, RelativePermeability.MAX,
+                    "(relative)");
             if (i > 0 && !(this.hertz[i] > this.hertz[i - 1])) {
-                throw new io.shieldmath.shield.quantity.InvalidQuantityException(
-                        "permeability table frequency [" + i + "]", this.hertz[i] + " Hz",
-                        "greater than the previous point, " + this.hertz[i - 1] + " Hz");
+                throw new InvalidQuantityException(
+                        "permeability table frequency [" + i + "]", Text.exact(this.hertz[i]) + " Hz",
+                        "greater than the previous point, " + Text.exact(this.hertz[i - 1]) + " Hz");
             }
             logHertz[i] = Math.log10(this.hertz[i]);
         }
@@ -49,9 +69,9 @@ public final class TabulatedPermeability implements PermeabilityModel {
     /**
      * The table's frequencies in Hz.
      *
-     * @return a copy of the frequencies
+     * @return a copy of the frequencies in Hz
      */
-    public double[] frequencies() {
+    public double[] hertz() {
         return hertz.clone();
     }
 
@@ -74,13 +94,13 @@ public final class TabulatedPermeability implements PermeabilityModel {
     }
 
     @Override
-    public double real(double f) {
-        return interpolate(real, f);
+    public double real(double hertz) {
+        return interpolate(real, hertz);
     }
 
     @Override
-    public double loss(double f) {
-        return interpolate(loss, f);
+    public double loss(double hertz) {
+        return interpolate(loss, hertz);
     }
 
     private double interpolate(double[] values, double f) {
@@ -114,6 +134,8 @@ public final class TabulatedPermeability implements PermeabilityModel {
 
     @Override
     public String toString() {
-        return "µr table of " + hertz.length + " points, " + hertz[0] + " Hz to " + hertz[hertz.length - 1] + " Hz";
+        return "µr table of " + hertz.length + (hertz.length == 1 ? " point, " : " points, ")
+                + Text.show(hertz[0], FrequencyUnit.values()) + " to "
+                + Text.show(hertz[hertz.length - 1], FrequencyUnit.values());
     }
 }

@@ -47,20 +47,39 @@ public final class Decibels implements Comparable<Decibels> {
     }
 
     /**
-     * Reads {@code "42.5 dB"} (the unit is required).
+     * Reads {@code "42.5 dB"}: a decimal number, optional spaces (the documented spaces of
+     * {@link ScalarQuantity}, the no-break space included) and the unit {@code dB}, which is
+     * required and case-sensitive.
      *
-     * @param text the text, not null
+     * @param text the text, not null, at most {@value Text#MAX_LENGTH} characters
      * @return the level
      * @throws InvalidQuantityException if the text does not read
      */
     public static Decibels parse(CharSequence text) {
-        String s = Require.nonNull("level text", text).toString().strip().replace('\u2212', '-');
-        if (!s.matches("[+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?\\s*dB")) {
-            throw InvalidQuantityException.unreadable("level", text.toString(), "not a number followed by dB",
-                    "a level such as \"42.5 dB\"");
-        }
-        return of(Double.parseDouble(s.substring(0, s.length() - 2).strip()));
+        return of(Text.parse("level", text, UNITS));
     }
+
+    /** The one unit of a level. */
+    private enum LevelUnit implements Unit {
+        DECIBEL;
+
+        @Override
+        public String symbol() {
+            return "dB";
+        }
+
+        @Override
+        public double toSi() {
+            return 1;
+        }
+
+        @Override
+        public java.util.List<String> aliases() {
+            return java.util.List.of();
+        }
+    }
+
+    private static final Unit[] UNITS = {LevelUnit.DECIBEL};
 
     /**
      * The level in dB.
@@ -124,8 +143,13 @@ public final class Decibels implements Comparable<Decibels> {
         return Double.hashCode(db);
     }
 
+    /**
+     * The text form, {@code "42.5 dB"}, with the shortest decimal that reads back exactly.
+     *
+     * @return the text form, read back by {@link #parse(CharSequence)} to an equal level
+     */
     @Override
     public String toString() {
-        return Text.number(db) + " dB";
+        return Text.exact(db) + " dB";
     }
 }

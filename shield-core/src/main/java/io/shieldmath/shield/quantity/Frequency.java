@@ -52,6 +52,21 @@ public final class Frequency extends ScalarQuantity<Frequency, FrequencyUnit> {
     }
 
     /**
+     * Reads the text form, or a bare number as a value in {@code bare}: {@code "50"} with
+     * {@code bare} Hz is 50 Hz, {@code "2 kHz"} is 2 kHz. For tables of frequencies where a
+     * column's unit is stated once.
+     *
+     * @param text the text, not null, at most {@value Text#MAX_LENGTH} characters
+     * @param bare the unit of a number written without one, not null
+     * @return the frequency
+     * @throws InvalidQuantityException if the text does not read or the value is out of range
+     */
+    public static Frequency parse(CharSequence text, FrequencyUnit bare) {
+        double si = Text.parse("frequency", text, UNITS, Require.nonNull("unit", bare));
+        return new Frequency(Require.positive("frequency", si, FrequencyUnit.HERTZ.symbol()));
+    }
+
+    /**
      * Obtains a value in hertz.
      *
      * @param value the value in hertz

@@ -3,6 +3,8 @@
  */
 package io.shieldmath.shield.quantity;
 
+import io.shieldmath.shield.internal.Text;
+
 /**
  * Thrown at the API boundary when a value is not acceptable: out of its physical range,
  * not a number, infinite, or text that does not parse. The message names the quantity,
@@ -41,14 +43,15 @@ public final class InvalidQuantityException extends IllegalArgumentException {
      * Creates an exception for text that does not read as a quantity.
      *
      * @param quantity the quantity's name
-     * @param text     the text as given
+     * @param text     the text as given; the message quotes at most its first 60 characters,
+     *                 with control characters escaped
      * @param problem  what is wrong with it
      * @param expected the accepted form, with the known units
      * @return the exception, ready to throw
      */
     public static InvalidQuantityException unreadable(String quantity, String text, String problem,
                                                       String expected) {
-        return new InvalidQuantityException(quantity, '"' + text + '"', problem, expected);
+        return new InvalidQuantityException(quantity, '"' + Text.clip(String.valueOf(text)) + '"', problem, expected);
     }
 
     private InvalidQuantityException(String quantity, String value, String problem, String expected) {

@@ -12,6 +12,8 @@ package io.shieldmath.shield.quantity;
  * Length t = mil(21);          // 533.4 µm
  * Frequency f = kHz(10);       // 10 kHz
  * Conductivity s = iacs(61);   // 35.38 MS/m
+ * Temperature t = celsius(60); // 60 °C
+ * Density rho = kgPerCubicMetre(8890);
  * }</pre>
  *
  * <p>Each method is the same as the named factory of its type and throws the same
@@ -240,5 +242,174 @@ public final class Quantities {
      */
     public static MagneticFluxDensity gauss(double value) {
         return MagneticFluxDensity.ofGauss(value);
+    }
+    /**
+     * A density in kg/m³; same as {@link Density#ofKilogramsPerCubicMetre(double)}.
+     *
+     * @param value the value in kg/m³
+     * @return the quantity
+     */
+    public static Density kgPerCubicMetre(double value) {
+        return Density.ofKilogramsPerCubicMetre(value);
+    }
+
+    /**
+     * A density in g/cm³; same as {@link Density#ofGramsPerCubicCentimetre(double)}.
+     *
+     * @param value the value in g/cm³
+     * @return the quantity
+     */
+    public static Density gPerCubicCentimetre(double value) {
+        return Density.ofGramsPerCubicCentimetre(value);
+    }
+
+    /**
+     * An areal mass in kg/m²; same as {@link ArealMass#ofKilogramsPerSquareMetre(double)}.
+     *
+     * @param value the value in kg/m²
+     * @return the quantity
+     */
+    public static ArealMass kgPerSquareMetre(double value) {
+        return ArealMass.ofKilogramsPerSquareMetre(value);
+    }
+
+    /**
+     * An areal mass in g/m²; same as {@link ArealMass#ofGramsPerSquareMetre(double)}.
+     *
+     * @param value the value in g/m²
+     * @return the quantity
+     */
+    public static ArealMass gPerSquareMetre(double value) {
+        return ArealMass.ofGramsPerSquareMetre(value);
+    }
+
+    /**
+     * A temperature in °C; same as {@link Temperature#ofCelsius(double)}.
+     *
+     * @param value the value in °C
+     * @return the quantity
+     */
+    public static Temperature celsius(double value) {
+        return Temperature.ofCelsius(value);
+    }
+
+    /**
+     * A temperature in K; same as {@link Temperature#ofKelvin(double)}.
+     *
+     * @param value the value in K
+     * @return the quantity
+     */
+    public static Temperature kelvin(double value) {
+        return Temperature.ofKelvin(value);
+    }
+
+    /**
+     * A temperature coefficient in 1/K; same as {@link TemperatureCoefficient#ofPerKelvin(double)}.
+     *
+     * @param value the value in 1/K
+     * @return the quantity
+     */
+    public static TemperatureCoefficient perKelvin(double value) {
+        return TemperatureCoefficient.ofPerKelvin(value);
+    }
+
+    /**
+     * A temperature coefficient in ppm/K; same as {@link TemperatureCoefficient#ofPpmPerKelvin(double)}.
+     *
+     * @param value the value in ppm/K
+     * @return the quantity
+     */
+    public static TemperatureCoefficient ppmPerKelvin(double value) {
+        return TemperatureCoefficient.ofPpmPerKelvin(value);
+    }
+
+    /**
+     * A voltage amplitude in V; same as {@link VoltageAmplitude#ofVolts(double)}.
+     *
+     * @param value the value in V
+     * @return the quantity
+     */
+    public static VoltageAmplitude V(double value) {
+        return VoltageAmplitude.ofVolts(value);
+    }
+
+    /**
+     * A voltage amplitude in mV; same as {@link VoltageAmplitude#ofMillivolts(double)}.
+     *
+     * @param value the value in mV
+     * @return the quantity
+     */
+    public static VoltageAmplitude mV(double value) {
+        return VoltageAmplitude.ofMillivolts(value);
+    }
+
+    /**
+     * A voltage amplitude in µV; same as {@link VoltageAmplitude#ofMicrovolts(double)}.
+     *
+     * @param value the value in µV
+     * @return the quantity
+     */
+    public static VoltageAmplitude uV(double value) {
+        return VoltageAmplitude.ofMicrovolts(value);
+    }
+
+    /**
+     * A current amplitude in A; same as {@link CurrentAmplitude#ofAmperes(double)}.
+     *
+     * @param value the value in A
+     * @return the quantity
+     */
+    public static CurrentAmplitude A(double value) {
+        return CurrentAmplitude.ofAmperes(value);
+    }
+
+    /**
+     * A current amplitude in mA; same as {@link CurrentAmplitude#ofMilliamperes(double)}.
+     *
+     * @param value the value in mA
+     * @return the quantity
+     */
+    public static CurrentAmplitude mA(double value) {
+        return CurrentAmplitude.ofMilliamperes(value);
+    }
+
+    /**
+     * An inductance in H; same as {@link Inductance#ofHenries(double)}.
+     *
+     * @param value the value in H
+     * @return the quantity
+     */
+    public static Inductance H(double value) {
+        return Inductance.ofHenries(value);
+    }
+
+    /**
+     * An inductance in mH; same as {@link Inductance#ofMillihenries(double)}.
+     *
+     * @param value the value in mH
+     * @return the quantity
+     */
+    public static Inductance mH(double value) {
+        return Inductance.ofMillihenries(value);
+    }
+
+    /**
+     * An inductance in µH; same as {@link Inductance#ofMicrohenries(double)}.
+     *
+     * @param value the value in µH
+     * @return the quantity
+     */
+    public static Inductance uH(double value) {
+        return Inductance.ofMicrohenries(value);
+    }
+
+    /**
+     * An inductance in nH; same as {@link Inductance#ofNanohenries(double)}.
+     *
+     * @param value the value in nH
+     * @return the quantity
+     */
+    public static Inductance nH(double value) {
+        return Inductance.ofNanohenries(value);
     }
 }

@@ -10,12 +10,20 @@ import io.shieldmath.shield.internal.Text;
  * A relative permeability, possibly complex: µr = µ' − j·µ'' with the time convention
  * e^{jωt} used throughout this library, so magnetic loss makes µ'' positive.
  *
- * <p>Allowed values: µ' finite and greater than 0 (diamagnetic metals such as copper
- * have µ' slightly below 1); µ'' finite and 0 or more. Immutable and thread-safe;
+ * <p>Allowed values: µ' greater than 0 (diamagnetic metals such as copper have µ'
+ * slightly below 1) and at most {@value #MAX}; µ'' from 0 to {@value #MAX}. Immutable and thread-safe;
  * equality is exact on both parts. The text form is {@code "25000"} for a real value and
  * {@code "1200 - j 800"} for a complex one; {@link #parse(CharSequence)} reads both.
  */
 public final class RelativePermeability {
+
+    /**
+     * The largest real or loss part accepted, 1e7: above the highest static permeability of
+     * any known soft magnetic material (about 1e6 for annealed amorphous and nanocrystalline
+     * alloys; ASM Handbook Vol. 2, "Magnetically soft materials"), and small enough that
+     * every model of this library evaluates it without overflow.
+     */
+    public static final double MAX = 1e7;
 
     /** The permeability of free space and of non-magnetic materials, µr = 1. */
     public static final RelativePermeability ONE = new RelativePermeability(1, 0);
@@ -31,9 +39,9 @@ public final class RelativePermeability {
     /**
      * Obtains a real relative permeability.
      *
-     * @param mu the relative permeability µ', finite and greater than 0
+     * @param mu the relative permeability µ', greater than 0 and at most {@value #MAX}
      * @return the permeability
-     * @throws InvalidQuantityException if µ' is NaN, infinite, zero or negative
+     * @throws InvalidQuantityException if µ' is NaN, infinite or out of range
      */
     public static RelativePermeability of(double mu) {
         return ofComplex(mu, 0);
@@ -42,14 +50,16 @@ public final class RelativePermeability {
     /**
      * Obtains a complex relative permeability µ' − j·µ''.
      *
-     * @param real the real part µ', finite and greater than 0
-     * @param loss the loss part µ'', finite and 0 or more
+     * @param real the real part µ', greater than 0 and at most {@value #MAX}
+     * @param loss the loss part µ'', from 0 to {@value #MAX}
      * @return the permeability
      * @throws InvalidQuantityException if either part is out of range
      */
     public static RelativePermeability ofComplex(double real, double loss) {
         Require.positive("relative permeability (real part)", real, "(relative)");
-        Require.nonNegative("relative permeability (loss part)", loss, "(relative)");
+        Require.inRange("relative permeability (real part)", real, 0, MAX, "(relative)");
+        Require.inRange("relative permeability (loss part)", Require.nonNegative(
+                "relative permeability (loss part)", loss, "(relative)"), 0, MAX, "(relative)");
         if (real == 1 && loss == 0) {
             return ONE;
         }
@@ -57,33 +67,19 @@ public final class RelativePermeability {
     }
 
     /**
-     * Reads {@code "25000"}, {@code "1200 - j 800"} or {@code "1200-j800"}.
+     * Reads {@code "25000"}, {@code "1200 - j 800"} or {@code "1200-j800"}: a decimal number,
+     * optionally followed by a minus sign, {@code j} and a second decimal number, with
+     * optional spaces between the parts (the grammar of {@link ScalarQuantity}; no spaces
+     * inside a number: {@code "1200 800"} is refused).
      *
-     * @param text the text, not null
+     * @param text the text, not null, at most 256 characters
      * @return the permeability
      * @throws InvalidQuantityException if the text does not read or a part is out of range
      */
     public static RelativePermeability parse(CharSequence text) {
-        String q = "relative permeability";
-        String s = Require.nonNull(q + " text", text).toString().replace('\u2212', '-').replaceAll("\\s+", "");
-        String expected = "a number such as \"25000\" or \"1200 - j 800\"";
-        try {
-            int j = s.indexOf("-j");
-            if (j < 0) {
-                return of(Double.parseDouble(requireDecimal(s)));
-            }
-            return ofComplex(Double.parseDouble(requireDecimal(s.substring(0, j))),
-                    Double.parseDouble(requireDecimal(s.substring(j + 2))));
-        } catch (NumberFormatException e) {
-            throw InvalidQuantityException.unreadable(q, text.toString(), "not a decimal number", expected);
-        }
-    }
-
-    private static String requireDecimal(String s) {
-        if (!s.matches("[+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?")) {
-            throw new NumberFormatException(s);
-        }
-        return s;
+        double[] parts = Text.parseComplex("relative permeability", text,
+                "a number such as \"25000\" or \"1200 - j 800\"");
+        return ofComplex(parts[0], parts[1]);
     }
 
     /**
@@ -125,13 +121,14 @@ public final class RelativePermeability {
     }
 
     /**
-     * The text form, {@code "25000"} or {@code "1200 - j 800"}.
+     * The text form, {@code "25000"} or {@code "1200 - j 800"}, with the shortest decimals
+     * that read back exactly.
      *
      * @return the text form, read back by {@link #parse(CharSequence)}
      */
     @Override
     public String toString() {
-        String r = Text.number(real);
-        return loss == 0 ? r : r + " - j " + Text.number(loss);
+        String r = Text.exact(real);
+        return loss == 0 ? r : r + " - j " + Text.exact(loss);
     }
 }

@@ -3,18 +3,25 @@
  */
 package io.shieldmath.shield.quantity;
 
-import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.internal.Text;
 
 /**
  * A real relative permittivity εr (dielectric constant). Conduction loss is carried by
  * the conductivity, not here.
  *
- * <p>Allowed values: finite and 1 or more (passive media at the frequencies this
- * library covers). Immutable and thread-safe; equality is by value. The text form is
+ * <p>Allowed values: from 1 (passive media at the frequencies this library covers) to
+ * {@value #MAX}. Immutable and thread-safe; equality is by value. The text form is
  * the plain number, for example {@code "2.1"}.
  */
 public final class RelativePermittivity {
+
+    /**
+     * The largest εr accepted, 1e6: above the dielectric constant of any solid in use (a few
+     * times 1e4 for barium titanate ceramics; CRC Handbook of Chemistry and Physics,
+     * "Permittivity (dielectric constant) of inorganic solids"), and small enough that every
+     * model of this library evaluates it without overflow.
+     */
+    public static final double MAX = 1e6;
 
     /** The permittivity of free space, εr = 1. */
     public static final RelativePermittivity ONE = new RelativePermittivity(1);
@@ -28,32 +35,28 @@ public final class RelativePermittivity {
     /**
      * Obtains a relative permittivity.
      *
-     * @param epsilon εr, finite and 1 or more
+     * @param epsilon εr, from 1 to {@value #MAX}
      * @return the permittivity
-     * @throws InvalidQuantityException if εr is NaN, infinite or below 1
+     * @throws InvalidQuantityException if εr is NaN or out of range
      */
     public static RelativePermittivity of(double epsilon) {
-        if (!(epsilon >= 1) || epsilon == Double.POSITIVE_INFINITY) {
+        if (!(epsilon >= 1 && epsilon <= MAX)) {
             throw new InvalidQuantityException("relative permittivity",
-                    Text.number(epsilon) + " (relative)", "finite and 1 or more");
+                    Text.show(epsilon, "(relative)"), "from 1 to " + Text.number(MAX) + " (relative)");
         }
         return epsilon == 1 ? ONE : new RelativePermittivity(epsilon);
     }
 
     /**
-     * Reads a plain number such as {@code "2.1"}.
+     * Reads a plain number such as {@code "2.1"} (the number grammar of
+     * {@link ScalarQuantity}, spaces around it allowed).
      *
-     * @param text the text, not null
+     * @param text the text, not null, at most 256 characters
      * @return the permittivity
      * @throws InvalidQuantityException if the text is not a decimal number or the value is out of range
      */
     public static RelativePermittivity parse(CharSequence text) {
-        String s = Require.nonNull("relative permittivity text", text).toString().strip();
-        if (!s.matches("[+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?")) {
-            throw InvalidQuantityException.unreadable("relative permittivity", text.toString(),
-                    "not a decimal number", "a number such as \"2.1\"");
-        }
-        return of(Double.parseDouble(s));
+        return of(Text.parseNumber("relative permittivity", text, "a number such as \"2.1\""));
     }
 
     /**
@@ -75,8 +78,13 @@ public final class RelativePermittivity {
         return Double.hashCode(value);
     }
 
+    /**
+     * The text form, the plain number with the shortest decimal that reads back exactly.
+     *
+     * @return for example {@code "2.1"}, read back by {@link #parse(CharSequence)}
+     */
     @Override
     public String toString() {
-        return Text.number(value);
+        return Text.exact(value);
     }
 }

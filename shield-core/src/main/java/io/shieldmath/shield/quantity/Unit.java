@@ -29,10 +29,23 @@ public interface Unit {
     double toSi();
 
     /**
-     * The spellings accepted by {@code parse} besides {@link #symbol()}; matching ignores
-     * case only where the unit list of the kind says so.
+     * The spellings accepted by {@code parse} besides {@link #symbol()}. Case matters in
+     * prefixes and one-letter symbols; the letters of unit words of two or more letters may
+     * be written in another case where that is unambiguous among the units of the kind
+     * ({@code "10 khz"} reads, {@code "1 mhz"} and {@code "5 mS/m"} as MS/m do not).
      *
      * @return the aliases, possibly empty, never null
      */
     List<String> aliases();
+
+    /**
+     * The zero offset of this unit in the SI unit of its kind: a value {@code v} in this
+     * unit is {@code v·toSi() + offset()} in SI units. Zero for every unit but the kelvin,
+     * whose offset is −273.15 against the degree Celsius in which {@link Temperature} is held.
+     *
+     * @return the offset, finite; 0 by default
+     */
+    default double offset() {
+        return 0;
+    }
 }

@@ -80,7 +80,7 @@ class CouplingValuesTest {
     void coilLimits() {
         Coil.loop(Length.ofMetres(1e-4), 1);
         Coil.loop(Length.ofMetres(10), 1_000_000);
-        assertEquals("coil radius: 11 m is out of range; allowed: from 1.0E-4 m to 10 m",
+        assertEquals("coil radius: 11 m is out of range; allowed: from 0.0001 m to 10 m",
                 assertThrows(InvalidQuantityException.class, () -> Coil.loop(Length.ofMetres(11), 1)).getMessage());
         assertEquals("turns: 0 turns is out of range; allowed: from 1 turns to 1000000 turns",
                 assertThrows(InvalidQuantityException.class, () -> Coil.loop(Length.ofMetres(1), 0)).getMessage());

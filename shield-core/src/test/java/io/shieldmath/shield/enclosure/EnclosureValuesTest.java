@@ -129,7 +129,7 @@ class EnclosureValuesTest {
         // Radius range 1 µm to 100 m, both ends included.
         Shell.sphere(m(1e-6));
         Shell.sphere(m(100));
-        assertEquals("shell inner radius: 200 m is out of range; allowed: from 1.0E-6 m to 100 m",
+        assertEquals("shell inner radius: 200 m is out of range; allowed: from 1e-6 m to 100 m",
                 assertThrows(InvalidQuantityException.class, () -> Shell.sphere(m(200))).getMessage());
         assertThrows(InvalidQuantityException.class, () -> Shell.cylinderAxial(m(1e-7)));
         assertThrows(InvalidQuantityException.class, () -> Shell.box(m(300), m(200), m(150)));   // 150 m radius

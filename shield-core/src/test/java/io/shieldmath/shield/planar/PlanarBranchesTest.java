@@ -216,7 +216,7 @@ class PlanarBranchesTest {
         // Thickness range of a layer: 1e-12 m to 100 m, both ends included.
         Layer.of(COPPER, Length.ofMetres(1e-12));
         Layer.of(COPPER, Length.ofMetres(100));
-        assertEquals("layer thickness: 1.0E-13 m is out of range; allowed: from 1.0E-12 m to 100 m",
+        assertEquals("layer thickness: 1e-13 m is out of range; allowed: from 1e-12 m to 100 m",
                 assertThrows(InvalidQuantityException.class, () -> Layer.of(COPPER, Length.ofMetres(1e-13)))
                         .getMessage());
         assertThrows(InvalidQuantityException.class, () -> Layer.of(COPPER, Length.ofMetres(Math.nextUp(100.0))));

@@ -59,8 +59,9 @@ class QuantityTest {
         assertEquals("40 µT", MagneticFluxDensity.ofMicrotesla(40).toString());
         assertEquals("0 S/m", Conductivity.ZERO.toString());
         for (Length l : new Length[] {Length.ofMils(21), Length.ofNanometres(3), Length.ofMetres(12.5)}) {
-            assertTrue(Length.parse(l.toString()).isCloseTo(l, 1e-12), l::toString);
+            assertTrue(Length.parse(l.toString()).isCloseTo(l, 1e-14), l::toString);
         }
+        assertEquals(Length.ofNanometres(3), Length.parse(Length.ofNanometres(3).toString()));
         assertEquals(Frequency.ofMegahertz(1.5), Frequency.parse(Frequency.ofMegahertz(1.5).toString()));
     }
 

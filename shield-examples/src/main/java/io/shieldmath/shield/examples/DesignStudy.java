@@ -21,8 +21,9 @@ import io.shieldmath.shield.enclosure.Shell;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.materials.Design;
-import io.shieldmath.shield.materials.DesignLayer;
+import io.shieldmath.shield.materials.files.Design;
+import io.shieldmath.shield.materials.files.DesignFile;
+import io.shieldmath.shield.materials.files.DesignLayer;
 import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.quantity.Frequency;
@@ -146,7 +147,7 @@ public final class DesignStudy {
         if (best != null) {
             Design d = Design.of(best.wall(), charger, FrequencyBand.of(Hz(10), kHz(200)), 61)
                     .withTitle(best.kind() + ": " + best.name() + " (wall stack, source side first)");
-            d.write(design);
+            DesignFile.write(d, design);
         }
         List<SeChart.Curve> curves = new ArrayList<>();
         for (Evaluated e : results) {
@@ -179,7 +180,7 @@ public final class DesignStudy {
         double mass = 0;
         for (DesignLayer l : layers) {
             if (l.material().isPresent()) {
-                mass += l.material().get().arealMass(l.thickness()) * PLATE_AREA_M2 * 1000;
+                mass += l.material().get().arealMass(l.thickness()).toKilogramsPerSquareMetre() * PLATE_AREA_M2 * 1000;
             }
         }
         return new Evaluated(name, kind, mass, need.marginOf(model), "the plate (edges ignored)", layers,
@@ -196,7 +197,7 @@ public final class DesignStudy {
         double mass = 0;
         for (DesignLayer l : wallSourceSideFirst) {
             if (l.material().isPresent()) {
-                mass += l.material().get().arealMass(l.thickness()) * area * 1000;
+                mass += l.material().get().arealMass(l.thickness()).toKilogramsPerSquareMetre() * area * 1000;
             }
         }
         return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(e, sweepHz), shell);

@@ -4,11 +4,14 @@
 package io.shieldmath.shield.examples;
 
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.materials.Design;
-import io.shieldmath.shield.materials.MaterialFileException;
+import io.shieldmath.shield.materials.files.CatalogueFile;
+import io.shieldmath.shield.materials.files.Design;
+import io.shieldmath.shield.materials.files.DesignFile;
+import io.shieldmath.shield.materials.files.MaterialFileException;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.FrequencyUnit;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import java.io.BufferedReader;
@@ -120,9 +123,9 @@ public final class ShieldBatch {
         try {
             Catalogue catalogue = Catalogue.builtIn();
             if (catalogueFile != null) {
-                catalogue = catalogue.extendedWith(Catalogue.read(Paths.get(catalogueFile)));
+                catalogue = catalogue.extendedWith(CatalogueFile.read(Paths.get(catalogueFile)));
             }
-            design = Design.read(Paths.get(designFile), catalogue);
+            design = DesignFile.read(Paths.get(designFile), catalogue);
         } catch (MaterialFileException e) {
             err.println("shield-batch: bad file: " + e.getMessage());
             return BAD_INPUT;
@@ -219,11 +222,7 @@ public final class ShieldBatch {
                 continue;
             }
             try {
-                if (s.matches("[+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?")) {
-                    list.add(Frequency.ofHertz(Double.parseDouble(s)).toHertz());
-                } else {
-                    list.add(Frequency.parse(s).toHertz());
-                }
+                list.add(Frequency.parse(s, FrequencyUnit.HERTZ).toHertz());
             } catch (InvalidQuantityException e) {
                 throw new BadLine(n, e.getMessage());
             }

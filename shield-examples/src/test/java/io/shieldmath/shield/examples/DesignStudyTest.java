@@ -13,7 +13,8 @@ import io.shieldmath.shield.enclosure.EnclosureEvaluation;
 import io.shieldmath.shield.enclosure.Opening;
 import io.shieldmath.shield.enclosure.Shell;
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.materials.Design;
+import io.shieldmath.shield.materials.files.Design;
+import io.shieldmath.shield.materials.files.DesignFile;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
@@ -52,7 +53,7 @@ class DesignStudyTest {
         // Re-evaluate the recommended can from the written design file, through the public API only.
         assertNotNull(o.recommended());
         assertTrue(o.recommended().startsWith("can: "), o::recommended);
-        Design d = Design.read(o.designFile(), Catalogue.builtIn());
+        Design d = DesignFile.read(o.designFile(), Catalogue.builtIn());
         List<Layer> inToOut = new ArrayList<>(d.barrier().layers());
         Collections.reverse(inToOut);           // the file lists the wall source (outer) side first
         Shell shell = Shell.box(Length.ofMetres(0.08), Length.ofMetres(0.06), Length.ofMetres(0.03))

@@ -8,7 +8,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.materials.Design;
+import io.shieldmath.shield.materials.files.Design;
+import io.shieldmath.shield.materials.files.DesignFile;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
@@ -76,7 +77,7 @@ class ShieldBatchTest {
         assertEquals(3, r.out().split("\"frequency_hz\"").length - 1, r.out());
         assertTrue(r.out().contains("\"frequency_hz\": 50000.0"), r.out());
         assertTrue(r.out().contains("\"design\": \"copper plate\""), r.out());
-        Design d = Design.read(design, Catalogue.builtIn());
+        Design d = DesignFile.read(design, Catalogue.builtIn());
         assertEquals("copper plate", d.title());
     }
 

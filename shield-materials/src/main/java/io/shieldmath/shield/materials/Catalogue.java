@@ -3,14 +3,13 @@
  */
 package io.shieldmath.shield.materials;
 
+import io.shieldmath.shield.materials.files.CatalogueFile;
 import io.shieldmath.shield.quantity.Conductivity;
+import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.internal.Require;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.Collections;
@@ -28,14 +27,14 @@ import java.util.function.Predicate;
  * catalogue read from a file, or a combination where the user's entries override.
  *
  * <pre>{@code
- * Catalogue cat = Catalogue.builtIn().extendedWith(Catalogue.read(Path.of("our-alloys.json")));
+ * Catalogue cat = Catalogue.builtIn().extendedWith(CatalogueFile.read(Path.of("our-alloys.json")));
  * Material m = cat.get("nickel-iron-80");
  * Catalogue light = cat.conductivityAbove(Conductivity.ofMegasiemensPerMetre(20))
  *                      .densityBelow(Density.ofKilogramsPerCubicMetre(3000));
  * }</pre>
  *
  * <p>The built-in catalogue is the JSON resource {@code catalogue.json} in this package,
- * in the format of {@link #toJson()}; every number in it carries its source or the words
+ * in the format of {@link CatalogueFile}; every number in it carries its source or the words
  * "from memory" with the source to check it against. The values are typical, not
  * guaranteed; verify designs by measurement.
  *
@@ -59,12 +58,13 @@ public final class Catalogue {
     private static final class BuiltIn {
         static final Catalogue INSTANCE = load();
 
+        /** The one use of the file formats from this package: the resource is a catalogue file. */
         private static Catalogue load() {
             try (InputStream in = Catalogue.class.getResourceAsStream(RESOURCE)) {
                 if (in == null) {
                     throw new IllegalStateException("the built-in catalogue resource " + RESOURCE + " is missing");
                 }
-                return read(in);
+                return CatalogueFile.read(in);
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
@@ -123,8 +123,15 @@ public final class Catalogue {
         return m;
     }
 
-    /** The message for an unknown identifier, with the nearest known ones. */
-    String unknown(String id) {
+    /**
+     * The message for an identifier this catalogue does not hold, naming up to five similar
+     * identifiers it does hold.
+     *
+     * @param id the identifier, not null
+     * @return for example {@code "no material \"coper\" in the catalogue; did you mean copper-annealed?"}
+     */
+    public String unknown(String id) {
+        Require.nonNull("id", id);
         List<String> near = near(id);
         return "no material \"" + id + "\" in the catalogue" + (near.isEmpty() ? "" : "; did you mean "
                 + String.join(", ", near) + "?");
@@ -279,97 +286,6 @@ public final class Catalogue {
             map.put(m.id(), m);
         }
         return new Catalogue(map);
-    }
-
-    /**
-     * Reads a catalogue document. Nothing is returned unless the whole document is valid.
-     *
-     * @param json the document, not null
-     * @return the catalogue
-     * @throws MaterialFileException if the document is not an acceptable catalogue (with its location)
-     */
-    public static Catalogue parse(String json) {
-        return Json.readCatalogue(Node.parse(Require.nonNull("json", json)));
-    }
-
-    /**
-     * Reads a catalogue from a stream (UTF-8, UTF-16 or UTF-32, detected); the stream is
-     * not closed.
-     *
-     * @param in the stream, not null
-     * @return the catalogue
-     * @throws MaterialFileException if the document is not an acceptable catalogue
-     * @throws UncheckedIOException  if reading fails
-     */
-    public static Catalogue read(InputStream in) {
-        return Json.readCatalogue(Node.parse(Require.nonNull("stream", in)));
-    }
-
-    /**
-     * Reads a catalogue file.
-     *
-     * @param file the file, not null
-     * @return the catalogue
-     * @throws IOException           if the file cannot be read
-     * @throws MaterialFileException if the document is not an acceptable catalogue
-     */
-    public static Catalogue read(Path file) throws IOException {
-        try (InputStream in = Files.newInputStream(Require.nonNull("file", file))) {
-            return read(in);
-        } catch (UncheckedIOException e) {
-            throw e.getCause();
-        }
-    }
-
-    /**
-     * The catalogue as a JSON document, read back by {@link #parse(String)} to an equal
-     * catalogue. The format (all quantities are text with a unit):
-     *
-     * <pre>
-     * {
-     *   "format": "shield-catalogue",
-     *   "version": 1,
-     *   "materials": [
-     *     {
-     *       "id": "copper-annealed",
-     *       "name": "Copper, annealed (IACS standard)",
-     *       "conductivity": { "value": "58 MS/m", "source": "IEC 60028 (100 % IACS by definition)" },
-     *       "temperatureCoefficient": { "value": "0.00393 /K", "source": "IEC 60028" },
-     *       "permeability": { "model": "constant", "value": "1", "source": "..." },
-     *       "permittivity": { "value": 1, "source": "..." },
-     *       "density": { "value": "8890 kg/m3", "source": "IEC 60028" },
-     *       "saturation": { "value": "0.75 T", "source": "..." },            (ferromagnetic only)
-     *       "note": "..."                                                    (optional)
-     *     }
-     *   ]
-     * }
-     * </pre>
-     *
-     * A finish known by sheet resistance has, instead of {@code conductivity},
-     * {@code "sheetResistance": { "value": "0.5 Ω/sq", "thickness": "50 µm", "source": "..." }}.
-     * Permeability models: {@code {"model": "constant", "value": "1200 - j 800"}},
-     * {@code {"model": "relaxation", "lowFrequency": 60000, "corner": "2 kHz"}} for
-     * µ(f) = µdc/(1 + j·f/fc), and {@code {"model": "table", "points": [{"frequency": "10 Hz",
-     * "real": 60000, "loss": 500}, ...]}} interpolated in log frequency; each with its
-     * {@code "source"}. Units: conductivity S/m, MS/m, % IACS; temperature coefficient
-     * {@code /K}, {@code 1/K}, {@code /°C} or {@code ppm/K}; density kg/m3 or g/cm3; flux
-     * density T, mT, G; sheet resistance Ω/sq or mΩ/sq. Unknown fields, missing units,
-     * duplicate identifiers and out-of-range values are rejected.
-     *
-     * @return the document, pretty-printed
-     */
-    public String toJson() {
-        return Json.writeCatalogue(this);
-    }
-
-    /**
-     * Writes {@link #toJson()} to a file in UTF-8, replacing it.
-     *
-     * @param file the file, not null
-     * @throws IOException if the file cannot be written
-     */
-    public void write(Path file) throws IOException {
-        Files.writeString(Require.nonNull("file", file), toJson(), StandardCharsets.UTF_8);
     }
 
     @Override

@@ -6,19 +6,27 @@ package io.shieldmath.shield.materials;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.internal.Text;
+import io.shieldmath.shield.quantity.ArealMass;
 import io.shieldmath.shield.quantity.Conductivity;
+import io.shieldmath.shield.quantity.ConductivityUnit;
+import io.shieldmath.shield.quantity.Density;
+import io.shieldmath.shield.quantity.DensityUnit;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import io.shieldmath.shield.quantity.RelativePermittivity;
 import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.quantity.SheetResistance;
+import io.shieldmath.shield.quantity.Temperature;
+import io.shieldmath.shield.quantity.TemperatureCoefficient;
+import io.shieldmath.shield.quantity.TemperatureUnit;
+import io.shieldmath.shield.quantity.Unit;
 import java.util.Collections;
 import java.util.EnumMap;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
-import java.util.OptionalDouble;
 import java.util.regex.Pattern;
 
 /**
@@ -31,7 +39,7 @@ import java.util.regex.Pattern;
  * <pre>{@code
  * Material cu = Catalogue.builtIn().get("copper-annealed");
  * Barrier b = Barrier.of(cu, mm(0.5));               // σ at 20 °C
- * Barrier hot = Barrier.of(cu.atTemperature(80), mm(0.5));
+ * Barrier hot = Barrier.of(cu.atTemperature(celsius(80)), mm(0.5));
  * }</pre>
  *
  * <p>Ranges checked when built: id lowercase kebab case ({@code [a-z0-9]+(-[a-z0-9]+)*},
@@ -52,12 +60,17 @@ public final class Material implements MediumSource {
 
     /** The static relative permeability from which a material counts as ferromagnetic. */
     public static final double FERROMAGNETIC_MU = 10;
-    /** The lowest temperature {@link #atTemperature(double)} accepts, in °C. */
-    public static final double MIN_CELSIUS = -200;
-    /** The highest temperature {@link #atTemperature(double)} accepts, in °C. */
-    public static final double MAX_CELSIUS = 500;
-    /** The reference temperature of the conductivity, in °C. */
-    public static final double REFERENCE_CELSIUS = 20;
+    /** The lowest temperature {@link #atTemperature(Temperature)} accepts, −200 °C. */
+    public static final Temperature MIN_TEMPERATURE = Temperature.ofCelsius(-200);
+    /** The highest temperature {@link #atTemperature(Temperature)} accepts, 500 °C. */
+    public static final Temperature MAX_TEMPERATURE = Temperature.ofCelsius(500);
+    /** The reference temperature of the conductivity, 20 °C. */
+    public static final Temperature REFERENCE_TEMPERATURE = Temperature.ROOM;
+
+    private static final double MIN_ALPHA = -0.01;
+    private static final double MAX_ALPHA = 0.01;
+    private static final Unit[] CONDUCTIVITY_UNITS = {ConductivityUnit.SIEMENS_PER_METRE,
+        ConductivityUnit.MEGASIEMENS_PER_METRE};
 
     private static final Pattern ID = Pattern.compile("[a-z0-9]+(?:-[a-z0-9]+)*");
     private static final String SHEET_SOURCE = "derived: σ = 1/(Rs·t) from the sheet resistance and nominal thickness";
@@ -65,7 +78,7 @@ public final class Material implements MediumSource {
     private final String id;
     private final String name;
     private final Conductivity conductivity;
-    private final Double alpha;
+    private final TemperatureCoefficient alpha;
     private final PermeabilityModel permeability;
     private final RelativePermittivity permittivity;
     private final Density density;
@@ -109,34 +122,24 @@ public final class Material implements MediumSource {
      * @throws IllegalArgumentException if the id or name is not acceptable
      */
     public static Builder builder(String id, String name) {
-        return new Builder(checkId(id), checkText("material name", name, 200));
+        return new Builder(checkId(id), Require.text("material name", name, 200));
     }
 
     /**
-     * Checks an identifier.
+     * Checks an identifier of a material.
      *
-     * @param id the identifier
+     * @param id the identifier, not null
      * @return the identifier
      * @throws IllegalArgumentException if it is not lowercase kebab case of at most 64 characters
      */
-    static String checkId(String id) {
+    public static String checkId(String id) {
         Require.nonNull("material id", id);
         if (id.length() > 64 || !ID.matcher(id).matches()) {
-            throw new IllegalArgumentException("material id \"" + id + "\" is not acceptable; allowed: lowercase "
+            throw new IllegalArgumentException("material id \"" + Text.clip(id) + "\" is not acceptable; allowed: lowercase "
                     + "letters and digits in words joined by single hyphens, at most 64 characters, such as "
                     + "\"copper-annealed\"");
         }
         return id;
-    }
-
-    static String checkText(String what, String text, int max) {
-        Require.nonNull(what, text);
-        String s = text.strip();
-        if (s.isEmpty() || s.length() > max || s.chars().anyMatch(Character::isISOControl)) {
-            throw new IllegalArgumentException(what + " must be 1 to " + max
-                    + " characters without control characters; got \"" + text + "\"");
-        }
-        return s;
     }
 
     /**
@@ -168,13 +171,12 @@ public final class Material implements MediumSource {
     }
 
     /**
-     * The temperature coefficient α of resistivity at 20 °C, in 1/K; empty for
-     * non-conductors.
+     * The temperature coefficient α of resistivity at 20 °C; empty for non-conductors.
      *
      * @return α, or empty
      */
-    public OptionalDouble temperatureCoefficient() {
-        return alpha == null ? OptionalDouble.empty() : OptionalDouble.of(alpha);
+    public Optional<TemperatureCoefficient> temperatureCoefficient() {
+        return Optional.ofNullable(alpha);
     }
 
     /**
@@ -285,47 +287,50 @@ public final class Material implements MediumSource {
      * resistivity law with the coefficient at 20 °C (IEC 60028 for copper: α = 0.00393 /K).
      * Materials without a coefficient (non-conductors) keep σ20.
      *
-     * @param celsius the temperature in °C, from −200 to 500, where 1 + α·(T − 20 °C) is at
-     *                least 0.1 (the linear law fails at cryogenic temperatures)
+     * @param temperature the temperature, not null, from −200 °C to 500 °C, where
+     *                    1 + α·(T − 20 °C) is at least 0.1 (the linear law fails at cryogenic
+     *                    temperatures)
      * @return σ(T)
      * @throws InvalidQuantityException if the temperature is out of range
      */
-    public Conductivity conductivityAt(double celsius) {
-        Require.inRange("temperature", celsius, MIN_CELSIUS, MAX_CELSIUS, "°C");
-        if (alpha == null || celsius == REFERENCE_CELSIUS) {
+    public Conductivity conductivityAt(Temperature temperature) {
+        double celsius = Require.nonNull("temperature", temperature).toCelsius();
+        Require.inRange("temperature", celsius, MIN_TEMPERATURE.toCelsius(), MAX_TEMPERATURE.toCelsius(), "°C");
+        if (alpha == null || temperature.equals(REFERENCE_TEMPERATURE)) {
             return conductivity;
         }
-        double factor = 1 + alpha * (celsius - REFERENCE_CELSIUS);
+        double factor = 1 + alpha.toPerKelvin() * temperature.kelvinAbove(REFERENCE_TEMPERATURE);
         if (!(factor >= 0.1)) {
-            throw new InvalidQuantityException("temperature", celsius + " °C",
+            throw new InvalidQuantityException("temperature", Text.show(celsius, TemperatureUnit.CELSIUS),
                     "a temperature where the linear law holds for " + id + " (1 + α·(T − 20 °C) ≥ 0.1)");
         }
         return Conductivity.ofSiemensPerMetre(conductivity.toSiemensPerMetre() / factor);
     }
 
     /**
-     * The medium at a temperature: conductivity by {@link #conductivityAt(double)}, the
+     * The medium at a temperature: conductivity by {@link #conductivityAt(Temperature)}, the
      * other properties as at 20 °C.
      *
-     * @param celsius the temperature in °C, from −200 to 500 (see {@link #conductivityAt(double)})
+     * @param temperature the temperature, not null, from −200 °C to 500 °C (see
+     *                    {@link #conductivityAt(Temperature)})
      * @return the medium, named with the temperature unless it is 20 °C
      * @throws InvalidQuantityException if the temperature is out of range
      */
-    public Medium atTemperature(double celsius) {
-        Conductivity sigma = conductivityAt(celsius);
-        if (celsius == REFERENCE_CELSIUS) {
+    public Medium atTemperature(Temperature temperature) {
+        Conductivity sigma = conductivityAt(temperature);
+        if (temperature.equals(REFERENCE_TEMPERATURE)) {
             return medium;
         }
-        return Medium.of(name + " at " + Density.plain(celsius) + " °C", sigma, permeability, permittivity);
+        return Medium.of(name + " at " + temperature, sigma, permeability, permittivity);
     }
 
     /**
      * The mass per area of a plate of this material, ρ·t.
      *
      * @param thickness the thickness, not null
-     * @return kg/m²
+     * @return the areal mass
      */
-    public double arealMass(Length thickness) {
+    public ArealMass arealMass(Length thickness) {
         return density.arealMass(thickness);
     }
 
@@ -346,10 +351,17 @@ public final class Material implements MediumSource {
                 sheetResistance, nominalThickness, note, sources);
     }
 
+    /**
+     * A description such as {@code "copper-annealed (Copper, annealed; σ 58 MS/m, µr 1, εr 1,
+     * 8890 kg/m³)"}, the numbers to six significant digits.
+     *
+     * @return the description
+     */
     @Override
     public String toString() {
-        return id + " (" + name + "; σ " + conductivity + ", " + permeability + ", εr " + permittivity + ", "
-                + density + ")";
+        return id + " (" + name + "; σ " + Text.show(conductivity.toSiemensPerMetre(), CONDUCTIVITY_UNITS) + ", "
+                + permeability + ", εr " + Text.number(permittivity.value()) + ", "
+                + Text.show(density.toKilogramsPerCubicMetre(), DensityUnit.KILOGRAM_PER_CUBIC_METRE) + ")";
     }
 
     /**
@@ -361,7 +373,7 @@ public final class Material implements MediumSource {
         private final String id;
         private final String name;
         private Conductivity conductivity;
-        private Double alpha;
+        private TemperatureCoefficient alpha;
         private PermeabilityModel permeability;
         private RelativePermittivity permittivity;
         private Density density;
@@ -377,7 +389,7 @@ public final class Material implements MediumSource {
         }
 
         private void source(MaterialProperty p, String source) {
-            sources.put(p, checkText(id + " " + p.key() + " source", source, 1000));
+            sources.put(p, Require.text(id + " " + p.key() + " source", source, 1000));
         }
 
         /**
@@ -418,12 +430,15 @@ public final class Material implements MediumSource {
         /**
          * Sets the temperature coefficient of resistivity at 20 °C.
          *
-         * @param perKelvin α in 1/K, from −0.01 to 0.01
-         * @param source    where the value comes from, not blank
+         * @param alpha  α, not null, from −0.01 /K to 0.01 /K
+         * @param source where the value comes from, not blank
          * @return this builder
+         * @throws InvalidQuantityException if α is out of range
          */
-        public Builder temperatureCoefficient(double perKelvin, String source) {
-            this.alpha = Require.inRange(id + " temperature coefficient", perKelvin, -0.01, 0.01, "/K") + 0.0;
+        public Builder temperatureCoefficient(TemperatureCoefficient alpha, String source) {
+            Require.inRange(id + " temperature coefficient", Require.nonNull("temperature coefficient", alpha)
+                    .toPerKelvin(), MIN_ALPHA, MAX_ALPHA, "/K");
+            this.alpha = alpha;
             source(MaterialProperty.TEMPERATURE_COEFFICIENT, source);
             return this;
         }
@@ -467,7 +482,7 @@ public final class Material implements MediumSource {
          */
         public Builder density(Density rho, String source) {
             Require.inRange(id + " density", Require.nonNull("density", rho).toKilogramsPerCubicMetre(),
-                    0.01, 30_000, "kg/m3");
+                    0.01, 30_000, "kg/m³");
             this.density = rho;
             source(MaterialProperty.DENSITY, source);
             return this;
@@ -495,7 +510,7 @@ public final class Material implements MediumSource {
          * @return this builder
          */
         public Builder note(String text) {
-            this.note = checkText(id + " note", text, 1000);
+            this.note = Require.text(id + " note", text, 1000);
             return this;
         }
 
@@ -523,7 +538,7 @@ public final class Material implements MediumSource {
             }
             if (permeability.staticValue() >= FERROMAGNETIC_MU && saturation == null) {
                 throw new IllegalArgumentException(id + ": a ferromagnetic material (static µr "
-                        + permeability.staticValue() + ") needs a saturation flux density ("
+                        + Text.number(permeability.staticValue()) + ") needs a saturation flux density ("
                         + MaterialProperty.SATURATION.key() + ")");
             }
             return new Material(this);

@@ -3,14 +3,15 @@
  */
 
 /**
- * Named materials with provenance, the built-in {@link io.shieldmath.shield.materials.Catalogue},
- * and JSON files for catalogues and designs.
+ * Named materials with provenance and the built-in
+ * {@link io.shieldmath.shield.materials.Catalogue}. The JSON files for catalogues and designs
+ * are in {@code io.shieldmath.shield.materials.files}.
  *
  * <pre>{@code
  * Catalogue cat = Catalogue.builtIn();
  * Material mu = cat.get("nickel-iron-80");
  * Barrier b = Barrier.of(cat.get("copper-annealed"), mm(0.3)).thenGap(mm(2)).then(mu, mm(0.5));
- * Design d = Design.read(Path.of("study.json"), cat);
+ * Catalogue ours = CatalogueFile.read(Path.of("our-alloys.json"));
  * }</pre>
  *
  * <p>Every value in the built-in catalogue is a typical handbook value, not a guarantee:

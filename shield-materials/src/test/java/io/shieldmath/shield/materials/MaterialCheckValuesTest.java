@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.materials;
 
+import static io.shieldmath.shield.quantity.Quantities.celsius;
 import io.shieldmath.shield.model.Sweep;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
@@ -10,6 +11,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import io.shieldmath.shield.field.ImpedanceForm;
+import io.shieldmath.shield.materials.files.DesignLayer;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.planar.Barrier;
@@ -31,7 +33,7 @@ class MaterialCheckValuesTest {
         Material cu = cat.get("copper-annealed");
         assertEquals(58.0e6, cu.conductivity().toSiemensPerMetre(), 0);
         assertEquals(100.0, cu.conductivity().toPercentIacs(), 1e-12);
-        assertEquals(0.00393, cu.temperatureCoefficient().getAsDouble(), 0);
+        assertEquals(0.00393, cu.temperatureCoefficient().get().toPerKelvin(), 0);
         assertEquals(8890, cu.density().toKilogramsPerCubicMetre(), 0);
         assertEquals(1, cu.permeability().staticValue(), 0);
         assertTrue(cu.source(MaterialProperty.CONDUCTIVITY).orElseThrow().contains("IEC 60028"));
@@ -44,15 +46,15 @@ class MaterialCheckValuesTest {
     @Test
     void copperConductivityFallsWithTemperature() {
         Material cu = cat.get("copper-annealed");
-        assertEquals(58.0e6 / 1.21615, cu.conductivityAt(75).toSiemensPerMetre(), 1);
-        assertEquals(47.6915e6, cu.atTemperature(75).conductivity().toSiemensPerMetre(), 100);
-        assertSame(cu.medium(), cu.atTemperature(20));
-        assertThrows(InvalidQuantityException.class, () -> cu.atTemperature(600));
-        assertThrows(InvalidQuantityException.class, () -> cu.atTemperature(Double.NaN));
+        assertEquals(58.0e6 / 1.21615, cu.conductivityAt(celsius(75)).toSiemensPerMetre(), 1);
+        assertEquals(47.6915e6, cu.atTemperature(celsius(75)).conductivity().toSiemensPerMetre(), 100);
+        assertSame(cu.medium(), cu.atTemperature(celsius(20)));
+        assertThrows(InvalidQuantityException.class, () -> cu.atTemperature(celsius(600)));
+        assertThrows(InvalidQuantityException.class, () -> cu.atTemperature(celsius(Double.NaN)));
         // Nickel's large coefficient (0.0068 /K) leaves the linear law's range near −130 °C.
-        assertThrows(InvalidQuantityException.class, () -> cat.get("nickel").atTemperature(-190));
+        assertThrows(InvalidQuantityException.class, () -> cat.get("nickel").atTemperature(celsius(-190)));
         // An insulator has no coefficient and keeps σ = 0.
-        assertEquals(0, cat.get("ptfe").conductivityAt(100).toSiemensPerMetre(), 0);
+        assertEquals(0, cat.get("ptfe").conductivityAt(celsius(100)).toSiemensPerMetre(), 0);
     }
 
     /**
@@ -109,8 +111,8 @@ class MaterialCheckValuesTest {
     /** Areal mass ρ·t: 1 mm of aluminium 6061 is 2.70 kg/m² (2700 kg/m³, ASM Vol. 2, from memory). */
     @Test
     void arealMass() {
-        assertEquals(2.70, cat.get("aluminium-6061-t6").arealMass(Length.ofMillimetres(1)), 1e-12);
-        assertEquals(8.89 * 0.5, cat.get("copper-annealed").arealMass(Length.ofMillimetres(0.5)), 1e-12);
+        assertEquals(2.70, cat.get("aluminium-6061-t6").arealMass(Length.ofMillimetres(1)).toKilogramsPerSquareMetre(), 1e-12);
+        assertEquals(8.89 * 0.5, cat.get("copper-annealed").arealMass(Length.ofMillimetres(0.5)).toKilogramsPerSquareMetre(), 1e-12);
     }
 
     /**

@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
 
 /**
  * Thrown when a catalogue or design file cannot be accepted: malformed JSON, a document

@@ -1,11 +1,12 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
 
+import io.shieldmath.shield.internal.Text;
+import io.shieldmath.shield.quantity.InvalidQuantityException;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -31,7 +32,8 @@ import tools.jackson.core.json.JsonFactory;
  * null; no type information is ever taken from the document.
  *
  * <p>Limits (Jackson {@link StreamReadConstraints} plus the checks here): document
- * {@value #MAX_DOCUMENT_CHARS} characters, nesting depth {@value #MAX_DEPTH}, strings
+ * {@value #MAX_DOCUMENT_CHARS} characters, counted after decoding for strings, streams
+ * and files alike (UTF-16 code units, as {@link String#length()} counts), nesting depth {@value #MAX_DEPTH}, strings
  * {@value #MAX_STRING} characters, numbers {@value #MAX_NUMBER} digits, field names
  * {@value #MAX_NAME} characters. Duplicate field names are rejected.
  *
@@ -90,16 +92,101 @@ final class Node {
 
     // ---------------------------------------------------------------- reading
 
+    /**
+     * Reads a document given as text. The limit is {@value #MAX_DOCUMENT_CHARS} characters
+     * (UTF-16 code units), the same rule as for streams; a leading byte-order mark is skipped.
+     */
     static Node parse(String json) {
-        return read(() -> FACTORY.createParser(ObjectReadContext.empty(), json));
+        if (json.length() > MAX_DOCUMENT_CHARS) {
+            throw tooLong(json.length());
+        }
+        String text = json.startsWith("\ufeff") ? json.substring(1) : json;
+        return read(() -> FACTORY.createParser(ObjectReadContext.empty(), text));
     }
 
-    static Node parse(Reader reader) {
-        return read(() -> FACTORY.createParser(ObjectReadContext.empty(), reader));
-    }
-
+    /**
+     * Reads a document from a stream: at most 4 × {@value #MAX_DOCUMENT_CHARS} bytes are read
+     * (no character takes more than 4 bytes in any of the encodings), the encoding is detected
+     * (UTF-8, UTF-16 or UTF-32, with or without a byte-order mark; RFC 8259 section 8.1 and
+     * RFC 4627 section 3), the bytes are decoded strictly (a malformed sequence is refused
+     * with its line and column), and the text is then read as by {@link #parse(String)}, so
+     * the size limit and the columns are the same as for a string.
+     */
     static Node parse(InputStream in) {
-        return read(() -> FACTORY.createParser(ObjectReadContext.empty(), in));
+        byte[] bytes;
+        try {
+            bytes = in.readNBytes((int) (4 * MAX_DOCUMENT_CHARS + 4));
+            if (bytes.length == 4 * MAX_DOCUMENT_CHARS + 4 && in.read() >= 0) {
+                throw tooLong(-1);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return parse(decode(bytes));
+    }
+
+    private static MaterialFileException tooLong(long chars) {
+        return new MaterialFileException("$", 1, 1, "the document is longer than " + MAX_DOCUMENT_CHARS
+                + " characters" + (chars > 0 ? " (" + chars + ")" : ""), null);
+    }
+
+    /** Detects the encoding of a JSON document and decodes it strictly. */
+    static String decode(byte[] b) {
+        int n = b.length;
+        java.nio.charset.Charset cs = java.nio.charset.StandardCharsets.UTF_8;
+        int skip = 0;
+        if (n >= 4 && b[0] == 0 && b[1] == 0 && (b[2] & 0xff) == 0xfe && (b[3] & 0xff) == 0xff) {
+            cs = java.nio.charset.Charset.forName("UTF-32BE");
+            skip = 4;
+        } else if (n >= 4 && (b[0] & 0xff) == 0xff && (b[1] & 0xff) == 0xfe && b[2] == 0 && b[3] == 0) {
+            cs = java.nio.charset.Charset.forName("UTF-32LE");
+            skip = 4;
+        } else if (n >= 3 && (b[0] & 0xff) == 0xef && (b[1] & 0xff) == 0xbb && (b[2] & 0xff) == 0xbf) {
+            skip = 3;
+        } else if (n >= 2 && (b[0] & 0xff) == 0xfe && (b[1] & 0xff) == 0xff) {
+            cs = java.nio.charset.StandardCharsets.UTF_16BE;
+            skip = 2;
+        } else if (n >= 2 && (b[0] & 0xff) == 0xff && (b[1] & 0xff) == 0xfe) {
+            cs = java.nio.charset.StandardCharsets.UTF_16LE;
+            skip = 2;
+        } else if (n >= 4 && b[0] == 0 && b[1] == 0 && b[2] == 0 && b[3] != 0) {
+            cs = java.nio.charset.Charset.forName("UTF-32BE");
+        } else if (n >= 4 && b[0] != 0 && b[1] == 0 && b[2] == 0 && b[3] == 0) {
+            cs = java.nio.charset.Charset.forName("UTF-32LE");
+        } else if (n >= 2 && b[0] == 0 && b[1] != 0) {
+            cs = java.nio.charset.StandardCharsets.UTF_16BE;
+        } else if (n >= 2 && b[0] != 0 && b[1] == 0) {
+            cs = java.nio.charset.StandardCharsets.UTF_16LE;
+        }
+        java.nio.charset.CharsetDecoder d = cs.newDecoder()
+                .onMalformedInput(java.nio.charset.CodingErrorAction.REPORT)
+                .onUnmappableCharacter(java.nio.charset.CodingErrorAction.REPORT);
+        java.nio.ByteBuffer input = java.nio.ByteBuffer.wrap(b, skip, n - skip);
+        java.nio.CharBuffer out = java.nio.CharBuffer.allocate(n - skip + 1);
+        java.nio.charset.CoderResult r = d.decode(input, out, true);
+        if (!r.isError()) {
+            r = d.flush(out);
+        }
+        if (r.isError()) {
+            out.flip();
+            int line = 1;
+            int column = 1;
+            for (int i = 0; i < out.limit(); i++) {
+                if (out.get(i) == '\n') {
+                    line++;
+                    column = 1;
+                } else {
+                    column++;
+                }
+            }
+            throw new MaterialFileException("$", line, column, "not valid JSON: malformed " + cs.name()
+                    + " byte sequence at byte " + input.position(), null);
+        }
+        out.flip();
+        if (out.length() > MAX_DOCUMENT_CHARS) {
+            throw tooLong(out.length());
+        }
+        return out.toString();
     }
 
     private interface ParserSource {
@@ -263,21 +350,19 @@ final class Node {
         }
     }
 
-    /** A plain number, or a text value holding one. */
+    /**
+     * A plain number, or a text value holding one, read by the one number grammar of the
+     * core ({@code Text.parseNumber}): a number that overflows or underflows to 0 is refused.
+     */
     double number() {
         if (type != Type.NUMBER && type != Type.STRING) {
             throw error("expected a number, found " + type.words);
         }
-        double v;
         try {
-            v = Double.parseDouble(text.strip());
-        } catch (NumberFormatException e) {
-            throw error("not a number: \"" + text + "\"");
+            return Text.parseNumber("number", text, "a decimal number such as 2.1");
+        } catch (InvalidQuantityException e) {
+            throw error(e.getMessage(), e);
         }
-        if (!Double.isFinite(v) || text.strip().matches(".*[^0-9eE.+\\-].*")) {
-            throw error("not a finite decimal number: \"" + text + "\"");
-        }
-        return v;
     }
 
     int integer(int min, int max) {

@@ -1,13 +1,16 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.examples;
+
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Material;
+import io.shieldmath.shield.materials.MaterialProperty;
 
 import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.medium.RelaxationPermeability;
 import io.shieldmath.shield.medium.TabulatedPermeability;
-import io.shieldmath.shield.internal.Require;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -24,8 +27,8 @@ import java.util.Map;
  * generated from the catalogue resource so that it cannot drift from it.
  *
  * <pre>
- * java -p ... -m io.shieldmath.shield.materials/io.shieldmath.shield.materials.CatalogueTable            (print)
- * java -p ... -m io.shieldmath.shield.materials/io.shieldmath.shield.materials.CatalogueTable README.md  (rewrite)
+ * ./mvnw -q -pl shield-examples exec:java -Dexamples.main=io.shieldmath.shield.examples.CatalogueTable                              (print)
+ * ./mvnw -q -pl shield-examples exec:java -Dexamples.main=io.shieldmath.shield.examples.CatalogueTable -Dexec.args=$PWD/README.md  (rewrite)
  * </pre>
  *
  * With a file argument, the text between the lines {@value #START} and {@value #END} is
@@ -68,7 +71,7 @@ public final class CatalogueTable {
      * @throws IllegalArgumentException if the markers are missing
      */
     public static String replaceSection(String document, String table) {
-        int a = Require.nonNull("document", document).indexOf(START);
+        int a = java.util.Objects.requireNonNull(document, "document").indexOf(START);
         int b = document.indexOf(END);
         if (a < 0 || b < a) {
             throw new IllegalArgumentException("the document has no " + START + " ... " + END + " section");
@@ -84,7 +87,7 @@ public final class CatalogueTable {
      * @throws IllegalArgumentException if the markers are missing
      */
     public static String section(String document) {
-        int a = Require.nonNull("document", document).indexOf(START);
+        int a = java.util.Objects.requireNonNull(document, "document").indexOf(START);
         int b = document.indexOf(END);
         if (a < 0 || b < a) {
             throw new IllegalArgumentException("the document has no " + START + " ... " + END + " section");
@@ -99,7 +102,7 @@ public final class CatalogueTable {
      * @return the Markdown text, ending with a line break
      */
     public static String markdown(Catalogue catalogue) {
-        Require.nonNull("catalogue", catalogue);
+        java.util.Objects.requireNonNull(catalogue, "catalogue");
         Map<String, Integer> sources = new LinkedHashMap<>();
         StringBuilder s = new StringBuilder();
         s.append("| id | material | σ at 20 °C | α (1/K) | µr model | \\|µr\\| at 10 Hz / 10 kHz / 100 kHz "
@@ -119,7 +122,7 @@ public final class CatalogueTable {
                 cells.add(text + ref(sources, m, MaterialProperty.CONDUCTIVITY));
             }
             cells.add(m.temperatureCoefficient().isPresent()
-                    ? digits(m.temperatureCoefficient().getAsDouble(), 4)
+                    ? digits(m.temperatureCoefficient().get().toPerKelvin(), 4)
                     + ref(sources, m, MaterialProperty.TEMPERATURE_COEFFICIENT) : "—");
             cells.add(model(m.permeability()) + ref(sources, m, MaterialProperty.PERMEABILITY));
             PermeabilityModel p = m.permeability();
@@ -151,7 +154,7 @@ public final class CatalogueTable {
             return "relaxation, µdc " + digits(r.lowFrequencyValue(), 6) + ", fc " + r.corner();
         }
         if (p instanceof TabulatedPermeability t) {
-            double[] hz = t.frequencies();
+            double[] hz = t.hertz();
             return "table of " + hz.length + " points";
         }
         return p.toString();

@@ -1,15 +1,17 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
+
+import io.shieldmath.shield.materials.Material;
 
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Length;
+import io.shieldmath.shield.quantity.Temperature;
 import io.shieldmath.shield.internal.Require;
 import java.util.Objects;
 import java.util.Optional;
-import java.util.OptionalDouble;
 
 /**
  * One layer of a {@link Design} as the user wrote it: a catalogue material (optionally at
@@ -33,13 +35,13 @@ public final class DesignLayer {
 
     private final Kind kind;
     private final Material material;
-    private final Double celsius;
+    private final Temperature temperature;
     private final Layer layer;
 
-    private DesignLayer(Kind kind, Material material, Double celsius, Medium medium, Length thickness) {
+    private DesignLayer(Kind kind, Material material, Temperature temperature, Medium medium, Length thickness) {
         this.kind = kind;
         this.material = material;
-        this.celsius = celsius;
+        this.temperature = temperature;
         this.layer = kind == Kind.GAP ? Layer.gap(thickness) : Layer.of(medium, thickness);
     }
 
@@ -74,13 +76,14 @@ public final class DesignLayer {
      *
      * @param material  the material, not null
      * @param thickness the thickness, 1 pm to 100 m
-     * @param celsius   the temperature in °C (see {@link Material#conductivityAt(double)})
+     * @param temperature the temperature, not null (see {@link Material#conductivityAt(Temperature)})
      * @return the layer
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the temperature is out of range
      */
-    public static DesignLayer of(Material material, Length thickness, double celsius) {
+    public static DesignLayer of(Material material, Length thickness, Temperature temperature) {
         Require.nonNull("material", material);
-        return new DesignLayer(Kind.MATERIAL, material, celsius + 0.0, material.atTemperature(celsius), thickness);
+        Require.nonNull("temperature", temperature);
+        return new DesignLayer(Kind.MATERIAL, material, temperature, material.atTemperature(temperature), thickness);
     }
 
     /**
@@ -125,10 +128,10 @@ public final class DesignLayer {
     /**
      * The operating temperature, when one was given for a material layer.
      *
-     * @return the temperature in °C, or empty (20 °C)
+     * @return the temperature, or empty (20 °C)
      */
-    public OptionalDouble temperature() {
-        return celsius == null ? OptionalDouble.empty() : OptionalDouble.of(celsius);
+    public Optional<Temperature> temperature() {
+        return Optional.ofNullable(temperature);
     }
 
     /**
@@ -161,19 +164,24 @@ public final class DesignLayer {
     @Override
     public boolean equals(Object o) {
         return o instanceof DesignLayer d && d.kind == kind && Objects.equals(d.material, material)
-                && Objects.equals(d.celsius, celsius) && d.layer.equals(layer);
+                && Objects.equals(d.temperature, temperature) && d.layer.equals(layer);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(kind, material, celsius, layer);
+        return Objects.hash(kind, material, temperature, layer);
     }
 
+    /**
+     * A description such as {@code "0.5 mm nickel-iron-80 at 60 °C"} or {@code "2 mm gap"}.
+     *
+     * @return the description
+     */
     @Override
     public String toString() {
         switch (kind) {
             case MATERIAL:
-                return thickness() + " " + material.id() + (celsius == null ? "" : " at " + Density.plain(celsius) + " °C");
+                return thickness() + " " + material.id() + (temperature == null ? "" : " at " + temperature);
             case MEDIUM:
                 return thickness() + " " + medium().name();
             default:

@@ -1,8 +1,15 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
 
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Material;
+import io.shieldmath.shield.materials.MaterialProperty;
+
+import io.shieldmath.shield.quantity.Temperature;
+import io.shieldmath.shield.quantity.TemperatureCoefficient;
+import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.Medium;
@@ -102,7 +109,7 @@ final class RandomMaterials {
                     : Conductivity.ofSiemensPerMetre(logUniform(r, 1e-3, 1e9)), text(r));
         }
         if (!insulator || r.nextBoolean()) {
-            b.temperatureCoefficient((r.nextDouble() * 2 - 1) * 0.01, text(r));
+            b.temperatureCoefficient(TemperatureCoefficient.ofPerKelvin((r.nextDouble() * 2 - 1) * 0.01), text(r));
         }
         PermeabilityModel mu = permeability(r);
         b.permeability(mu, text(r));
@@ -166,7 +173,7 @@ final class RandomMaterials {
                     } else {
                         double c = Math.rint(r.nextDouble() * 200 - 50);
                         try {
-                            layers.add(DesignLayer.of(m, t, c));
+                            layers.add(DesignLayer.of(m, t, Temperature.ofCelsius(c)));
                         } catch (IllegalArgumentException e) {
                             layers.add(DesignLayer.of(m, t));
                         }

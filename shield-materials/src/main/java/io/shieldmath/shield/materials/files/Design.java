@@ -1,7 +1,10 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials;
+package io.shieldmath.shield.materials.files;
+
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.Material;
 
 import io.shieldmath.shield.model.Sweep;
 import io.shieldmath.shield.field.IncidentField;
@@ -12,11 +15,6 @@ import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.internal.Require;
-import java.io.IOException;
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -33,11 +31,11 @@ import java.util.Objects;
  *                              DesignLayer.of(cat.get("nickel-iron-80"), mm(0.5))),
  *         IncidentField.magneticNearField(cm(6), ImpedanceForm.EXACT_DIPOLE),
  *         FrequencyBand.parse("10 Hz to 100 kHz"), 41);
- * d.write(Path.of("study.json"));
- * Sweep<PlanarResult> s = Design.read(Path.of("study.json"), cat).sweep();
+ * DesignFile.write(d, Path.of("study.json"));
+ * Sweep<PlanarResult> s = DesignFile.read(Path.of("study.json"), cat).sweep();
  * }</pre>
  *
- * <p>The file format is described in {@link #toJson()}. Results are estimates for an
+ * <p>The file format is described in {@link DesignFile}. Results are estimates for an
  * infinite flat sheet; real shields are limited by seams, openings and edges and must be
  * verified by measurement.
  *
@@ -102,7 +100,7 @@ public final class Design {
      */
     public Design withTitle(String newTitle) {
         Require.nonNull("title", newTitle);
-        String t = newTitle.isBlank() ? "" : Material.checkText("design title", newTitle, 200);
+        String t = newTitle.isBlank() ? "" : Require.text("design title", newTitle, 200);
         return t.equals(title) ? this : new Design(t, layers, field, band, points);
     }
 
@@ -167,97 +165,6 @@ public final class Design {
      */
     public Sweep<PlanarResult> sweep() {
         return barrier.facing(field).sweep(band, points);
-    }
-
-    /**
-     * Reads a design file, resolving material identifiers against a catalogue.
-     *
-     * @param json      the document, not null
-     * @param catalogue the catalogue for material references, not null
-     * @return the design
-     * @throws MaterialFileException if the document is not an acceptable design (with its location)
-     */
-    public static Design parse(String json, Catalogue catalogue) {
-        Require.nonNull("catalogue", catalogue);
-        return Json.readDesign(Node.parse(Require.nonNull("json", json)), catalogue);
-    }
-
-    /**
-     * Reads a design file from a stream (UTF-8, UTF-16 or UTF-32, detected); the stream is
-     * not closed.
-     *
-     * @param in        the stream, not null
-     * @param catalogue the catalogue for material references, not null
-     * @return the design
-     * @throws MaterialFileException if the document is not an acceptable design
-     * @throws java.io.UncheckedIOException if reading fails
-     */
-    public static Design read(InputStream in, Catalogue catalogue) {
-        Require.nonNull("catalogue", catalogue);
-        return Json.readDesign(Node.parse(Require.nonNull("stream", in)), catalogue);
-    }
-
-    /**
-     * Reads a design file.
-     *
-     * @param file      the file, not null
-     * @param catalogue the catalogue for material references, not null
-     * @return the design
-     * @throws IOException           if the file cannot be read
-     * @throws MaterialFileException if the document is not an acceptable design
-     */
-    public static Design read(Path file, Catalogue catalogue) throws IOException {
-        try (InputStream in = Files.newInputStream(Require.nonNull("file", file))) {
-            return read(in, catalogue);
-        } catch (java.io.UncheckedIOException e) {
-            throw e.getCause();
-        }
-    }
-
-    /**
-     * The design as a JSON document, read back by {@link #parse(String, Catalogue)} to an
-     * equal design (given a catalogue holding the same materials). The format:
-     *
-     * <pre>
-     * {
-     *   "format": "shield-design",
-     *   "version": 1,
-     *   "title": "lid for a fluxgate housing",            (optional)
-     *   "layers": [
-     *     { "material": "copper-annealed", "thickness": "0.3 mm" },
-     *     { "gap": "2 mm" },
-     *     { "material": "nickel-iron-80", "thickness": "0.5 mm", "temperature": "60 °C" },
-     *     { "medium": { "name": "my alloy", "conductivity": "1.6 MS/m",
-     *                   "permeability": { "model": "relaxation", "lowFrequency": 30000, "corner": "1 kHz" },
-     *                   "permittivity": 1 },
-     *       "thickness": "1 mm" }
-     *   ],
-     *   "field": { "kind": "magnetic-near-field", "distance": "6 cm", "impedance": "exact-dipole" },
-     *   "band": "10 Hz to 100 kHz",
-     *   "points": 41
-     * }
-     * </pre>
-     *
-     * Field kinds: {@code plane-wave} (no distance or impedance), {@code magnetic-near-field},
-     * {@code electric-near-field}; impedance forms {@code textbook}, {@code exact-dipole}. A
-     * finish known by sheet resistance may omit the thickness (its nominal one is used).
-     * Values are written in a short unit form where that reads back exactly, else in SI
-     * units with every digit.
-     *
-     * @return the document, pretty-printed
-     */
-    public String toJson() {
-        return Json.writeDesign(this);
-    }
-
-    /**
-     * Writes {@link #toJson()} to a file in UTF-8, replacing it.
-     *
-     * @param file the file, not null
-     * @throws IOException if the file cannot be written
-     */
-    public void write(Path file) throws IOException {
-        Files.writeString(Require.nonNull("file", file), toJson(), StandardCharsets.UTF_8);
     }
 
     @Override
