@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.examples;
+package io.shieldmath.shield.cli;
 
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.Design;
@@ -38,7 +38,7 @@ import java.util.Locale;
  * with the offending line or JSON path; exit codes: 0 done, 2 bad command line, 3 bad
  * design file or input line, 4 file not readable.
  */
-public final class ShieldBatch {
+public final class BatchCommand {
 
     /** Exit code: done. */
     public static final int OK = 0;
@@ -52,7 +52,7 @@ public final class ShieldBatch {
     private static final String USAGE_TEXT = "usage: shield-batch --design FILE [--catalogue FILE] "
             + "[--band \"10 Hz to 100 kHz\" --points N | --stdin] [--format csv|json]";
 
-    private ShieldBatch() {
+    private BatchCommand() {
     }
 
     /**
