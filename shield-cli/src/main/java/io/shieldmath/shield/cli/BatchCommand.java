@@ -11,32 +11,69 @@ import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
-import java.io.BufferedReader;
+import java.io.FileDescriptor;
+import java.io.FileOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
+import java.io.OutputStream;
 import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.NoSuchFileException;
-import java.nio.file.Paths;
-import java.util.ArrayList;
-import java.util.List;
-import java.util.Locale;
+import java.io.UncheckedIOException;
+import java.util.Objects;
 
 /**
- * A batch command for instrument software and scripts: evaluates a JSON design file at
- * frequencies and prints CSV or JSON to standard output.
+ * The {@code shield-batch} command, for instrument software and scripts: evaluates a JSON
+ * design file at frequencies and prints CSV or JSON to standard output.
  *
  * <pre>
  * shield-batch --design FILE [--catalogue FILE] [--band "10 Hz to 100 kHz" --points N | --stdin]
  *              [--format csv|json]
  * </pre>
  *
- * <p>Without {@code --band} or {@code --stdin} the design's own band and points are used.
- * With {@code --stdin}, one frequency per line ({@code "10 kHz"}, or a plain number in Hz);
- * blank lines and lines starting with {@code #} are skipped. Errors go to standard error
- * with the offending line or JSON path; exit codes: 0 done, 2 bad command line, 3 bad
- * design file or input line, 4 file not readable.
+ * <p>Run it with {@code java -jar shield-all.jar ...} (the shaded jar of shield-examples) or
+ * {@code java -cp ... io.shieldmath.shield.cli.BatchCommand ...}.
+ *
+ * <p>Without {@code --band} or {@code --stdin} the design's own band and points are used;
+ * {@code --points} alone uses the design's band, {@code --band} alone the design's points.
+ * With {@code --stdin}, each line holds one frequency ({@code "10 kHz"}, or a plain decimal
+ * number in Hz such as {@code 50000} or {@code 2.5e4}); blank lines and lines starting with
+ * {@code #} are skipped, and one byte-order mark at the start is skipped. Standard input is
+ * read as a stream: each line is answered before the next is read, in bounded memory, and
+ * the output is flushed whenever the command would wait for more input.
+ *
+ * <p>Limits, each checked before anything is allocated for it: {@code --points} from 1 to
+ * {@value #MAX_POINTS}; a line of standard input, and the {@code --band} text, at most
+ * {@value #MAX_LINE_CHARS} characters; at most {@value #MAX_INPUT_LINES} lines of standard
+ * input (blank and comment lines included). Design and catalogue files must be regular files
+ * (not a directory, named pipe or device) and are limited by their reader.
+ *
+ * <p>Messages go to standard error, one line each, starting {@code "shield-batch: "}, with
+ * the file, line or JSON path at fault. Input echoed in them is shortened to its first
+ * characters and its length, and control characters are written as Java escapes such as
+ * &#92;u001B, so no input can drive the terminal.
+ *
+ * <p>Exit codes:
+ * <ul>
+ *   <li>{@value #OK} ({@link #OK}): done, every result written;</li>
+ *   <li>{@value #USAGE} ({@link #USAGE}): the command line is wrong (unknown, repeated or
+ *       incomplete option, a bad {@code --band}, {@code --points} or {@code --format}, a
+ *       forbidden combination); the usage text follows the message;</li>
+ *   <li>{@value #BAD_INPUT} ({@link #BAD_INPUT}): the design or catalogue file is not
+ *       acceptable, a line of standard input is not a frequency in range, standard input holds
+ *       no frequency or is over a limit, or the design cannot be evaluated at a frequency (an
+ *       arithmetic failure);</li>
+ *   <li>{@value #IO_ERROR} ({@link #IO_ERROR}): a file or standard input cannot be read (no
+ *       such file, not a regular file, permission denied, read error);</li>
+ *   <li>{@value #OUTPUT_ERROR} ({@link #OUTPUT_ERROR}): standard output cannot be written
+ *       (disk full, closed, or the reading program has gone, as with {@code | head -1}); the
+ *       command stops computing at once;</li>
+ *   <li>{@value #INTERNAL_ERROR} ({@link #INTERNAL_ERROR}): a fault in this program; the
+ *       message names the exception.</li>
+ * </ul>
+ * On exit codes 3 to 5 in the middle of a run, the results already computed have been
+ * written (for JSON, an unterminated document): trust the output only on exit code 0.
+ *
+ * <p>Not instantiable; {@link #run(String[], InputStream, OutputStream, PrintStream)} keeps no
+ * state between calls and may be called from several threads with different streams.
  */
 public final class BatchCommand {
 
@@ -44,10 +81,28 @@ public final class BatchCommand {
     public static final int OK = 0;
     /** Exit code: the command line is wrong. */
     public static final int USAGE = 2;
-    /** Exit code: the design file or an input line is wrong. */
+    /** Exit code: the design or catalogue file, or an input line, is wrong or cannot be evaluated. */
     public static final int BAD_INPUT = 3;
-    /** Exit code: a file could not be read. */
+    /** Exit code: a file or standard input could not be read. */
     public static final int IO_ERROR = 4;
+    /** Exit code: standard output could not be written. */
+    public static final int OUTPUT_ERROR = 5;
+    /** Exit code: a fault in this program (an unexpected exception), reported in one line. */
+    public static final int INTERNAL_ERROR = 70;
+
+    /** The largest {@code --points}. */
+    public static final int MAX_POINTS = 100_000;
+    /** The most characters in one line of standard input, and in the {@code --band} text. */
+    public static final int MAX_LINE_CHARS = 1000;
+    /** The most lines read from standard input in one run. */
+    public static final long MAX_INPUT_LINES = 10_000_000L;
+
+    /** The command's name, at the start of every message. */
+    static final String NAME = "shield-batch";
+
+    /** The evaluation range in words. */
+    private static final String RANGE = "from " + ResultOutput.shortest(PlanarEvaluation.MIN_HERTZ) + " Hz to "
+            + ResultOutput.shortest(PlanarEvaluation.MAX_HERTZ) + " Hz";
 
     private static final String USAGE_TEXT = "usage: shield-batch --design FILE [--catalogue FILE] "
             + "[--band \"10 Hz to 100 kHz\" --points N | --stdin] [--format csv|json]";
@@ -56,207 +111,202 @@ public final class BatchCommand {
     }
 
     /**
-     * Runs the command and exits with its exit code.
+     * Runs the command on the process's standard streams and exits with its exit code.
+     * Standard output is written through its file descriptor, so that a write failure is seen
+     * (through {@link System#out} it would be recorded and ignored).
      *
      * @param args the command line
      */
     public static void main(String[] args) {
-        System.exit(run(args, System.in, System.out, System.err));
+        int code = run(args, System.in, new FileOutputStream(FileDescriptor.out), System.err);
+        System.err.flush();
+        System.exit(code);
     }
 
     /**
-     * Runs the command.
+     * Runs the command. Nothing is closed; {@code out} is flushed. A {@link PrintStream} given
+     * as {@code out} is asked {@link PrintStream#checkError()} after each block written, so its
+     * failures count too.
      *
-     * @param args the command line
-     * @param in   standard input, read with {@code --stdin}
-     * @param out  standard output, for results
-     * @param err  standard error, for messages
-     * @return the exit code
+     * @param args the command line, not null
+     * @param in   standard input, read only with {@code --stdin}, not null
+     * @param out  standard output, for results, not null
+     * @param err  standard error, for messages, not null
+     * @return the exit code, one of {@link #OK}, {@link #USAGE}, {@link #BAD_INPUT},
+     *         {@link #IO_ERROR}, {@link #OUTPUT_ERROR} and {@link #INTERNAL_ERROR}
+     * @throws NullPointerException if an argument is null
      */
-    public static int run(String[] args, InputStream in, PrintStream out, PrintStream err) {
-        String designFile = null;
-        String catalogueFile = null;
-        String band = null;
-        Integer points = null;
-        boolean stdin = false;
-        String format = "csv";
-        for (int i = 0; i < args.length; i++) {
-            String a = args[i];
-            boolean hasValue = i + 1 < args.length;
-            switch (a) {
-                case "--design" -> designFile = hasValue ? args[++i] : null;
-                case "--catalogue" -> catalogueFile = hasValue ? args[++i] : null;
-                case "--band" -> band = hasValue ? args[++i] : null;
-                case "--points" -> {
-                    try {
-                        points = hasValue ? Integer.parseInt(args[++i]) : null;
-                    } catch (NumberFormatException e) {
-                        return usage(err, "--points takes a whole number from 1 to 100000; got " + args[i]);
-                    }
-                }
-                case "--stdin" -> stdin = true;
-                case "--format" -> format = hasValue ? args[++i] : null;
-                default -> {
-                    return usage(err, "unknown option " + a);
-                }
-            }
-            if (!hasValue && !a.equals("--stdin")) {
-                return usage(err, a + " needs a value");
-            }
-        }
-        if (designFile == null) {
-            return usage(err, "--design FILE is required");
-        }
-        if (!"csv".equals(format) && !"json".equals(format)) {
-            return usage(err, "--format is csv or json; got " + format);
-        }
-        if (stdin && (band != null || points != null)) {
-            return usage(err, "give either --stdin or --band/--points, not both");
-        }
-        if (points != null && (points < 1 || points > 100_000)) {
-            return usage(err, "--points takes a whole number from 1 to 100000; got " + points);
-        }
-        Design design;
+    public static int run(String[] args, InputStream in, OutputStream out, PrintStream err) {
+        Objects.requireNonNull(args, "args");
+        Objects.requireNonNull(in, "in");
+        Objects.requireNonNull(out, "out");
+        Objects.requireNonNull(err, "err");
         try {
-            Catalogue catalogue = Catalogue.builtIn();
-            if (catalogueFile != null) {
-                catalogue = catalogue.extendedWith(Catalogue.read(Paths.get(catalogueFile)));
+            execute(Options.parse(args), in, out);
+            return OK;
+        } catch (CommandFailure f) {
+            err.println(NAME + ": " + Messages.clean(f.getMessage()));
+            if (f.exitCode() == USAGE) {
+                err.println(USAGE_TEXT);
             }
-            design = Design.read(Paths.get(designFile), catalogue);
-        } catch (MaterialFileException e) {
-            err.println("shield-batch: bad file: " + e.getMessage());
-            return BAD_INPUT;
-        } catch (NoSuchFileException e) {
-            err.println("shield-batch: no such file: " + e.getFile());
-            return IO_ERROR;
-        } catch (IOException e) {
-            err.println("shield-batch: cannot read: " + e.getMessage());
-            return IO_ERROR;
+            return f.exitCode();
+        } catch (RuntimeException e) {
+            err.println(NAME + ": internal error, please report it: " + Messages.clean(e.toString()));
+            return INTERNAL_ERROR;
         }
-        double[] hz;
+    }
+
+    private static void execute(Options o, InputStream in, OutputStream out) throws CommandFailure {
+        FrequencyBand band = o.band() == null ? null : band(o.band());
+        Design design = readDesign(o);
+        PlanarEvaluation evaluation;
         try {
-            if (stdin) {
-                hz = readFrequencies(in);
-            } else if (band != null || points != null) {
-                FrequencyBand b = band != null ? FrequencyBand.parse(band) : design.band();
-                hz = b.logSpacedHertz(points != null ? points : design.points());
+            evaluation = design.barrier().facing(design.field());
+        } catch (IllegalArgumentException e) {
+            throw CommandFailure.badInput("design file " + Messages.abbreviate(o.design()) + ": " + e.getMessage(), e);
+        }
+        ResultOutput output = new ResultOutput(out, o.json(), design.title(), design.field().toString());
+        try {
+            if (o.stdin()) {
+                fromStandardInput(evaluation, new LineInput(in, output::flush), output);
             } else {
-                hz = design.band().logSpacedHertz(design.points());
+                FrequencyBand b = band != null ? band : design.band();
+                int points = o.points() > 0 ? o.points() : design.points();
+                for (double hz : b.logSpacedHertz(points)) {
+                    output.write(evaluate(evaluation, hz));
+                }
             }
-        } catch (BadLine e) {
-            err.println("shield-batch: standard input line " + e.line + ": " + e.getMessage());
-            return BAD_INPUT;
-        } catch (InvalidQuantityException e) {
-            err.println("shield-batch: --band: " + e.getMessage());
-            return USAGE;
-        } catch (IOException e) {
-            err.println("shield-batch: cannot read standard input: " + e.getMessage());
-            return IO_ERROR;
-        }
-        if (hz.length == 0) {
-            err.println("shield-batch: no frequencies on standard input");
-            return BAD_INPUT;
-        }
-        PlanarEvaluation eval = design.barrier().facing(design.field());
-        List<PlanarResult> results = new ArrayList<>(hz.length);
-        try {
-            for (double f : hz) {
-                results.add(eval.at(Frequency.ofHertz(f)));
+            output.finish();
+        } catch (CommandFailure f) {
+            if (f.exitCode() != OUTPUT_ERROR) {
+                flushQuietly(output);
             }
-        } catch (InvalidQuantityException e) {
-            err.println("shield-batch: " + e.getMessage());
-            return BAD_INPUT;
-        }
-        if (format.equals("csv")) {
-            out.println("frequency_hz,se_db,absorption_db,reflection_db,multiple_reflection_db");
-            for (PlanarResult r : results) {
-                out.println(String.format(Locale.ROOT, "%s,%.6f,%.6f,%.6f,%.6f", shortest(r.frequency().toHertz()),
-                        r.totalDb(), r.absorptionDb(), r.reflectionDb(), r.multipleReflectionDb()));
-            }
-        } else {
-            StringBuilder s = new StringBuilder("{\n  \"design\": ").append(quote(design.title()))
-                    .append(",\n  \"field\": ").append(quote(design.field().toString()))
-                    .append(",\n  \"results\": [");
-            for (int i = 0; i < results.size(); i++) {
-                PlanarResult r = results.get(i);
-                s.append(i == 0 ? "\n" : ",\n").append(String.format(Locale.ROOT,
-                        "    {\"frequency_hz\": %s, \"se_db\": %.6f, \"absorption_db\": %.6f, \"reflection_db\": %.6f, "
-                                + "\"multiple_reflection_db\": %.6f}", shortest(r.frequency().toHertz()), r.totalDb(),
-                        r.absorptionDb(), r.reflectionDb(), r.multipleReflectionDb()));
-            }
-            s.append("\n  ]\n}");
-            out.println(s);
-        }
-        return OK;
-    }
-
-    private static int usage(PrintStream err, String problem) {
-        err.println("shield-batch: " + problem);
-        err.println(USAGE_TEXT);
-        return USAGE;
-    }
-
-    /** A bad line of standard input. */
-    private static final class BadLine extends Exception {
-        private static final long serialVersionUID = 1L;
-        final int line;
-
-        BadLine(int line, String message) {
-            super(message);
-            this.line = line;
+            throw f;
         }
     }
 
-    private static double[] readFrequencies(InputStream in) throws IOException, BadLine {
-        List<Double> list = new ArrayList<>();
-        BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
+    private static void fromStandardInput(PlanarEvaluation evaluation, LineInput lines, ResultOutput output)
+            throws CommandFailure {
         String line;
-        int n = 0;
-        while ((line = r.readLine()) != null) {
-            n++;
+        while ((line = lines.next()) != null) {
             String s = line.strip();
             if (s.isEmpty() || s.startsWith("#")) {
                 continue;
             }
+            double hz;
             try {
-                if (s.matches("[+-]?(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?")) {
-                    list.add(Frequency.ofHertz(Double.parseDouble(s)).toHertz());
-                } else {
-                    list.add(Frequency.parse(s).toHertz());
-                }
+                hz = frequencyHertz(s);
+            } catch (CommandFailure f) {
+                throw CommandFailure.badInput("standard input line " + lines.lineNumber() + ": " + f.getMessage(),
+                        f);
+            }
+            output.write(evaluate(evaluation, hz));
+        }
+        if (output.count() == 0) {
+            throw CommandFailure.badInput("no frequencies on standard input", null);
+        }
+    }
+
+    /**
+     * A frequency in Hz from one line of input: a plain decimal number in Hz, or a number and a
+     * unit as {@link Frequency#parse(CharSequence)} reads them; within the evaluation range.
+     */
+    static double frequencyHertz(String s) throws CommandFailure {
+        double hz;
+        if (plainNumber(s)) {
+            try {
+                hz = Double.parseDouble(s);
+            } catch (NumberFormatException e) {
+                throw CommandFailure.badInput("frequency: cannot read " + Messages.quote(s)
+                        + " as a number in Hz; expected for example 50000, 2.5e4 or \"25 kHz\"", e);
+            }
+        } else {
+            try {
+                hz = Frequency.parse(s).toHertz();
             } catch (InvalidQuantityException e) {
-                throw new BadLine(n, e.getMessage());
+                throw CommandFailure.badInput(e.getMessage().replace(s, Messages.abbreviate(s)), e);
             }
         }
-        double[] hz = new double[list.size()];
-        for (int i = 0; i < hz.length; i++) {
-            hz[i] = list.get(i);
+        if (!(hz >= PlanarEvaluation.MIN_HERTZ && hz <= PlanarEvaluation.MAX_HERTZ)) {
+            throw CommandFailure.badInput("frequency: " + Messages.quote(s) + " is out of range; allowed: "
+                    + RANGE, null);
         }
         return hz;
     }
 
-    private static String shortest(double v) {
-        return Double.toString(v).replace("E", "e");
-    }
-
-    private static String quote(String s) {
-        StringBuilder b = new StringBuilder("\"");
-        for (char c : (s == null ? "" : s).toCharArray()) {
-            switch (c) {
-                case '"' -> b.append("\\\"");
-                case '\\' -> b.append("\\\\");
-                case '\n' -> b.append("\\n");
-                case '\r' -> b.append("\\r");
-                case '\t' -> b.append("\\t");
-                default -> {
-                    if (c < 0x20) {
-                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
-                    } else {
-                        b.append(c);
-                    }
-                }
+    /**
+     * Whether a line is meant as a plain number in Hz: it starts like a number and holds only
+     * digits, signs, points and exponent letters, so {@link Double#parseDouble(String)} cannot
+     * take a hexadecimal form, {@code NaN}, {@code Infinity}, a type suffix or white space.
+     */
+    private static boolean plainNumber(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            boolean digit = c >= '0' && c <= '9';
+            if (!(digit || c == '+' || c == '-' || c == '.' || (i > 0 && (c == 'e' || c == 'E')))) {
+                return false;
             }
         }
-        return b.append('"').toString();
+        return true;
+    }
+
+    private static FrequencyBand band(String text) throws CommandFailure {
+        FrequencyBand b;
+        try {
+            b = FrequencyBand.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw CommandFailure.usage("--band: " + e.getMessage().replace(text, Messages.abbreviate(text)));
+        }
+        double low = b.low().toHertz();
+        double high = b.high().toHertz();
+        if (!(low >= PlanarEvaluation.MIN_HERTZ && high <= PlanarEvaluation.MAX_HERTZ)) {
+            throw CommandFailure.usage("--band: the " + (low < PlanarEvaluation.MIN_HERTZ ? "lower" : "upper")
+                    + " end of " + Messages.quote(text) + " is out of range; allowed: " + RANGE);
+        }
+        return b;
+    }
+
+    private static Design readDesign(Options o) throws CommandFailure {
+        Catalogue catalogue = Catalogue.builtIn();
+        if (o.catalogue() != null) {
+            String name = "catalogue file " + Messages.abbreviate(o.catalogue());
+            try (InputStream in = InputFiles.open("catalogue file", o.catalogue())) {
+                catalogue = catalogue.extendedWith(Catalogue.read(in));
+            } catch (MaterialFileException | IllegalArgumentException e) {
+                throw CommandFailure.badInput("bad " + name + ": " + e.getMessage(), e);
+            } catch (UncheckedIOException e) {
+                throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e.getCause()), e);
+            } catch (IOException e) {
+                throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e), e);
+            }
+        }
+        String name = "design file " + Messages.abbreviate(o.design());
+        try (InputStream in = InputFiles.open("design file", o.design())) {
+            return Design.read(in, catalogue);
+        } catch (MaterialFileException | IllegalArgumentException e) {
+            throw CommandFailure.badInput("bad " + name + ": " + e.getMessage(), e);
+        } catch (UncheckedIOException e) {
+            throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e.getCause()), e);
+        } catch (IOException e) {
+            throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e), e);
+        }
+    }
+
+    private static PlanarResult evaluate(PlanarEvaluation evaluation, double hz)
+            throws CommandFailure {
+        try {
+            return evaluation.at(Frequency.ofHertz(hz));
+        } catch (ArithmeticException | IllegalArgumentException e) {
+            throw CommandFailure.badInput("cannot evaluate the design at " + ResultOutput.shortest(hz) + " Hz: "
+                    + e.getMessage(), e);
+        }
+    }
+
+    private static void flushQuietly(ResultOutput output) {
+        try {
+            output.flush();
+        } catch (CommandFailure ignored) {
+            // The first failure is the one reported.
+        }
     }
 }

@@ -15,6 +15,7 @@ import io.shieldmath.shield.quantity.Length;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -41,11 +42,19 @@ class BatchCommandTest {
     }
 
     static Run run(String stdin, String... args) {
+        return run(new ByteArrayInputStream(stdin.getBytes(StandardCharsets.UTF_8)), args);
+    }
+
+    static Run run(InputStream stdin, String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = BatchCommand.run(args, new ByteArrayInputStream(stdin.getBytes(StandardCharsets.UTF_8)),
-                new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8));
+        int code = BatchCommand.run(args, stdin, out, new PrintStream(err, true, StandardCharsets.UTF_8));
         return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    }
+
+    /** The design file {@link #DESIGN} in a directory. */
+    static Path design(Path dir) throws IOException {
+        return write(dir, "d.json", DESIGN);
     }
 
     static Path write(Path dir, String name, String text) throws IOException {
@@ -118,7 +127,10 @@ class BatchCommandTest {
         assertEquals(BatchCommand.USAGE, run("", "--design").code());
         assertEquals(BatchCommand.USAGE, run("", "--design", "x.json", "--format", "xml").code());
         assertEquals(BatchCommand.USAGE, run("", "--design", "x.json", "--wat").code());
-        assertEquals(BatchCommand.IO_ERROR, run("", "--design", dir.resolve("missing.json").toString()).code());
+        Run missing = run("", "--design", dir.resolve("missing.json").toString());
+        assertEquals(BatchCommand.IO_ERROR, missing.code());
+        assertTrue(missing.err().contains("cannot read design file " + dir.resolve("missing.json") + ": no such file"),
+                missing.err());
         Path design = write(dir, "d.json", DESIGN);
         Run band = run("", "--design", design.toString(), "--band", "10 Hz to 1 kHz", "--points", "3");
         assertEquals(0, band.code(), band.err());

@@ -1,0 +1,127 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.cli;
+
+import java.util.Locale;
+
+/**
+ * Makes text safe and short before it reaches standard error, which is often a terminal.
+ *
+ * <p>Everything the command prints on standard error goes through {@link #clean(String)}:
+ * input echoed in a message can hold terminal escape sequences (ESC, BEL), line breaks that
+ * would forge a second message, invisible bidirectional controls that reorder what the
+ * reader sees, or megabytes of text. Echoed input is first shortened with
+ * {@link #quote(String)}.
+ */
+final class Messages {
+
+    /** Echoed input longer than this many code points is shortened. */
+    static final int ECHO_LIMIT = 60;
+    /** The number of code points kept from the start of shortened input. */
+    static final int ECHO_KEPT = 40;
+    /** A message longer than this many code points is cut, saying how much was left out. */
+    static final int MESSAGE_LIMIT = 600;
+    /** A run of more digits than this is shortened, keeping its first digits and its length. */
+    static final int DIGIT_RUN_LIMIT = 40;
+    /** The number of digits kept from the start of a shortened run. */
+    static final int DIGITS_KEPT = 20;
+
+    private Messages() {
+    }
+
+    /**
+     * Input text for a message: in double quotes, shortened to its first
+     * {@value #ECHO_KEPT} code points and its length when longer than {@value #ECHO_LIMIT}.
+     * Control characters are left for {@link #clean(String)} to escape.
+     */
+    static String quote(String text) {
+        return '"' + abbreviate(text) + '"';
+    }
+
+    /** The text itself, or its start and its length when longer than {@value #ECHO_LIMIT} code points. */
+    static String abbreviate(String text) {
+        int n = text.codePointCount(0, text.length());
+        if (n <= ECHO_LIMIT) {
+            return text;
+        }
+        return text.substring(0, text.offsetByCodePoints(0, ECHO_KEPT)) + "... (" + n + " characters)";
+    }
+
+    /**
+     * A message made safe for a terminal, on one line: runs of more than
+     * {@value #DIGIT_RUN_LIMIT} digits shortened, the whole cut to {@value #MESSAGE_LIMIT}
+     * code points, then every control character (C0, DEL, C1), format character
+     * (bidirectional controls, zero-width characters, byte-order marks), line or paragraph
+     * separator and unpaired surrogate written as a Java escape (&#92;u001B; tab, line
+     * feed and carriage return as {@code \t}, {@code \n}, {@code \r}).
+     */
+    static String clean(String message) {
+        String s = cut(shortenDigitRuns(message == null ? "(no message)" : message));
+        StringBuilder b = new StringBuilder(s.length() + 16);
+        for (int i = 0; i < s.length(); ) {
+            int cp = s.codePointAt(i);
+            int width = Character.charCount(cp);
+            switch (cp) {
+                case '\t' -> b.append("\\t");
+                case '\n' -> b.append("\\n");
+                case '\r' -> b.append("\\r");
+                default -> {
+                    if (unsafe(cp)) {
+                        for (int k = i; k < i + width; k++) {
+                            b.append(String.format(Locale.ROOT, "\\u%04X", (int) s.charAt(k)));
+                        }
+                    } else {
+                        b.appendCodePoint(cp);
+                    }
+                }
+            }
+            i += width;
+        }
+        return b.toString();
+    }
+
+    /** Whether a code point must not reach a terminal as it is. */
+    static boolean unsafe(int cp) {
+        int type = Character.getType(cp);
+        return type == Character.CONTROL || type == Character.FORMAT || type == Character.SURROGATE
+                || type == Character.LINE_SEPARATOR || type == Character.PARAGRAPH_SEPARATOR;
+    }
+
+    private static String cut(String s) {
+        int n = s.codePointCount(0, s.length());
+        if (n <= MESSAGE_LIMIT) {
+            return s;
+        }
+        return s.substring(0, s.offsetByCodePoints(0, MESSAGE_LIMIT)) + "... (" + (n - MESSAGE_LIMIT)
+                + " more characters)";
+    }
+
+    private static String shortenDigitRuns(String s) {
+        StringBuilder b = null;
+        int i = 0;
+        int copied = 0;
+        while (i < s.length()) {
+            if (!isAsciiDigit(s.charAt(i))) {
+                i++;
+                continue;
+            }
+            int start = i;
+            while (i < s.length() && isAsciiDigit(s.charAt(i))) {
+                i++;
+            }
+            if (i - start > DIGIT_RUN_LIMIT) {
+                if (b == null) {
+                    b = new StringBuilder(s.length());
+                }
+                b.append(s, copied, start + DIGITS_KEPT).append("... (").append(i - start).append(" digits)");
+                copied = i;
+            }
+        }
+        return b == null ? s : b.append(s, copied, s.length()).toString();
+    }
+
+    private static boolean isAsciiDigit(char c) {
+        return c >= '0' && c <= '9';
+    }
+}
