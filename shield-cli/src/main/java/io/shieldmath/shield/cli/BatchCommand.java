@@ -163,7 +163,7 @@ public final class BatchCommand {
         try {
             evaluation = design.barrier().facing(design.field());
         } catch (IllegalArgumentException e) {
-            throw CommandFailure.badInput("design file " + Messages.abbreviate(o.design()) + ": " + e.getMessage(), e);
+            throw CommandFailure.badInput("design file " + Messages.fileName(o.design()) + ": " + e.getMessage(), e);
         }
         ResultOutput output = new ResultOutput(out, o.json(), design.title(), design.field().toString());
         try {
@@ -224,7 +224,7 @@ public final class BatchCommand {
             try {
                 hz = Frequency.parse(s).toHertz();
             } catch (InvalidQuantityException e) {
-                throw CommandFailure.badInput(e.getMessage().replace(s, Messages.abbreviate(s)), e);
+                throw CommandFailure.badInput(e.getMessage(), e);
             }
         }
         if (!(hz >= PlanarEvaluation.MIN_HERTZ && hz <= PlanarEvaluation.MAX_HERTZ)) {
@@ -255,7 +255,7 @@ public final class BatchCommand {
         try {
             b = FrequencyBand.parse(text);
         } catch (IllegalArgumentException e) {
-            throw CommandFailure.usage("--band: " + e.getMessage().replace(text, Messages.abbreviate(text)));
+            throw CommandFailure.usage("--band: " + e.getMessage());
         }
         double low = b.low().toHertz();
         double high = b.high().toHertz();
@@ -269,7 +269,7 @@ public final class BatchCommand {
     private static Design readDesign(Options o) throws CommandFailure {
         Catalogue catalogue = Catalogue.builtIn();
         if (o.catalogue() != null) {
-            String name = "catalogue file " + Messages.abbreviate(o.catalogue());
+            String name = "catalogue file " + Messages.fileName(o.catalogue());
             try (InputStream in = InputFiles.open("catalogue file", o.catalogue())) {
                 catalogue = catalogue.extendedWith(Catalogue.read(in));
             } catch (MaterialFileException | IllegalArgumentException e) {
@@ -280,7 +280,7 @@ public final class BatchCommand {
                 throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e), e);
             }
         }
-        String name = "design file " + Messages.abbreviate(o.design());
+        String name = "design file " + Messages.fileName(o.design());
         try (InputStream in = InputFiles.open("design file", o.design())) {
             return Design.read(in, catalogue);
         } catch (MaterialFileException | IllegalArgumentException e) {

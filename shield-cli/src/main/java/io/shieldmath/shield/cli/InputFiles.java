@@ -38,7 +38,7 @@ final class InputFiles {
      *                        exist, is not a regular file or cannot be opened
      */
     static InputStream open(String role, String name) throws CommandFailure {
-        String prefix = "cannot read " + role + " " + Messages.abbreviate(name) + ": ";
+        String prefix = "cannot read " + role + " " + Messages.fileName(name) + ": ";
         Path path;
         try {
             path = Paths.get(name);

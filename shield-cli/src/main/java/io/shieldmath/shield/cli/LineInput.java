@@ -5,15 +5,16 @@ package io.shieldmath.shield.cli;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.Reader;
-import java.nio.charset.CharacterCodingException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 
 /**
- * Standard input as a stream of lines in bounded memory: one buffer of
- * {@value #BUFFER_CHARS} characters and one line of at most {@link BatchCommand#MAX_LINE_CHARS}
+ * Standard input as a stream of lines in bounded memory: a buffer of {@value #BUFFER_CHARS}
+ * bytes, one of as many characters, and one line of at most {@link BatchCommand#MAX_LINE_CHARS}
  * characters are held, whatever the length of the input.
  *
  * <p>The input is strict UTF-8 (a malformed byte sequence is an error, never a replacement
@@ -29,7 +30,7 @@ import java.nio.charset.StandardCharsets;
  */
 final class LineInput {
 
-    /** The size of the character buffer. */
+    /** The size of the byte buffer and of the character buffer. */
     static final int BUFFER_CHARS = 8192;
 
     /** Called before a read that may wait for input. */
@@ -43,21 +44,26 @@ final class LineInput {
         void run() throws CommandFailure;
     }
 
-    private final Reader reader;
+    private final InputStream in;
+    private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+            .onMalformedInput(CodingErrorAction.REPORT)
+            .onUnmappableCharacter(CodingErrorAction.REPORT);
     private final BeforeWait beforeWait;
+    private final ByteBuffer bytes = ByteBuffer.allocate(BUFFER_CHARS).flip();
     private final char[] buffer = new char[BUFFER_CHARS];
+    private final CharBuffer chars = CharBuffer.wrap(buffer);
     private final StringBuilder line = new StringBuilder();
     private int position;
     private int end;
+    private boolean inputEnded;
     private boolean atEnd;
+    private boolean malformed;
     private boolean atStart = true;
     private boolean skipLineFeed;
     private long lineNumber;
 
     LineInput(InputStream in, BeforeWait beforeWait) {
-        this.reader = new InputStreamReader(in, StandardCharsets.UTF_8.newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT)
-                .onUnmappableCharacter(CodingErrorAction.REPORT));
+        this.in = in;
         this.beforeWait = beforeWait;
     }
 
@@ -126,27 +132,52 @@ final class LineInput {
         return line.toString();
     }
 
+    /**
+     * Decodes the next characters into the buffer, reading more bytes when the decoder needs
+     * them. A malformed sequence is reported only after the characters before it have been
+     * delivered, so that its line number is right.
+     */
     private boolean fill() throws CommandFailure {
-        if (atEnd) {
-            return false;
+        while (true) {
+            if (malformed) {
+                throw CommandFailure.badInput("standard input line " + (lineNumber + 1) + ": not UTF-8 text", null);
+            }
+            if (atEnd) {
+                return false;
+            }
+            chars.clear();
+            CoderResult r = decoder.decode(bytes, chars, inputEnded);
+            if (r.isError()) {
+                malformed = true;
+            } else if (inputEnded && r.isUnderflow()) {
+                decoder.flush(chars);
+                atEnd = true;
+            }
+            if (chars.position() > 0) {
+                position = 0;
+                end = chars.position();
+                return true;
+            }
+            if (!malformed && !atEnd) {
+                readBytes();
+            }
         }
+    }
+
+    private void readBytes() throws CommandFailure {
         beforeWait.run();
-        int n;
+        bytes.compact();
         try {
-            do {
-                n = reader.read(buffer, 0, buffer.length);
-            } while (n == 0);
-        } catch (CharacterCodingException e) {
-            throw CommandFailure.badInput("standard input line " + (lineNumber + 1) + ": not UTF-8 text", e);
+            int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
+            if (n < 0) {
+                inputEnded = true;
+            } else {
+                bytes.position(bytes.position() + n);
+            }
         } catch (IOException e) {
             throw CommandFailure.unreadable("cannot read standard input: " + e.getMessage(), e);
+        } finally {
+            bytes.flip();
         }
-        if (n < 0) {
-            atEnd = true;
-            return false;
-        }
-        position = 0;
-        end = n;
-        return true;
     }
 }

@@ -16,10 +16,14 @@ import java.util.Locale;
  */
 final class Messages {
 
-    /** Echoed input longer than this many code points is shortened. */
-    static final int ECHO_LIMIT = 60;
+    /** Echoed input longer than this many code points is shortened; a shortened text is never longer. */
+    static final int ECHO_LIMIT = 80;
     /** The number of code points kept from the start of shortened input. */
     static final int ECHO_KEPT = 40;
+    /** A file name longer than this many code points is shortened. */
+    static final int NAME_LIMIT = 200;
+    /** The number of code points kept from each end of a shortened file name. */
+    static final int NAME_KEPT = 80;
     /** A message longer than this many code points is cut, saying how much was left out. */
     static final int MESSAGE_LIMIT = 600;
     /** A run of more digits than this is shortened, keeping its first digits and its length. */
@@ -49,7 +53,22 @@ final class Messages {
     }
 
     /**
-     * A message made safe for a terminal, on one line: runs of more than
+     * A file name for a message: itself up to {@value #NAME_LIMIT} code points, else its first
+     * and last {@value #NAME_KEPT} code points (the end holds the file's own name) and its length.
+     */
+    static String fileName(String name) {
+        int n = name.codePointCount(0, name.length());
+        if (n <= NAME_LIMIT) {
+            return name;
+        }
+        return name.substring(0, name.offsetByCodePoints(0, NAME_KEPT)) + "..."
+                + name.substring(name.offsetByCodePoints(name.length(), -NAME_KEPT)) + " (" + n + " characters)";
+    }
+
+    /**
+     * A message made safe for a terminal, on one line: every text in double quotes longer
+     * than {@value #ECHO_LIMIT} code points shortened as {@link #abbreviate(String)} does (the
+     * library's exceptions quote the input they refuse), runs of more than
      * {@value #DIGIT_RUN_LIMIT} digits shortened, the whole cut to {@value #MESSAGE_LIMIT}
      * code points, then every control character (C0, DEL, C1), format character
      * (bidirectional controls, zero-width characters, byte-order marks), line or paragraph
@@ -57,7 +76,7 @@ final class Messages {
      * feed and carriage return as {@code \t}, {@code \n}, {@code \r}).
      */
     static String clean(String message) {
-        String s = cut(shortenDigitRuns(message == null ? "(no message)" : message));
+        String s = cut(shortenDigitRuns(shortenQuoted(message == null ? "(no message)" : message)));
         StringBuilder b = new StringBuilder(s.length() + 16);
         for (int i = 0; i < s.length(); ) {
             int cp = s.codePointAt(i);
@@ -95,6 +114,29 @@ final class Messages {
         }
         return s.substring(0, s.offsetByCodePoints(0, MESSAGE_LIMIT)) + "... (" + (n - MESSAGE_LIMIT)
                 + " more characters)";
+    }
+
+    private static String shortenQuoted(String s) {
+        StringBuilder b = null;
+        int copied = 0;
+        int open = s.indexOf('"');
+        while (open >= 0) {
+            int close = s.indexOf('"', open + 1);
+            if (close < 0) {
+                break;
+            }
+            String inside = s.substring(open + 1, close);
+            String shorter = abbreviate(inside);
+            if (shorter.length() < inside.length()) {
+                if (b == null) {
+                    b = new StringBuilder(s.length());
+                }
+                b.append(s, copied, open + 1).append(shorter);
+                copied = close;
+            }
+            open = s.indexOf('"', close + 1);
+        }
+        return b == null ? s : b.append(s, copied, s.length()).toString();
     }
 
     private static String shortenDigitRuns(String s) {
