@@ -224,7 +224,9 @@ public final class BatchCommand {
             try {
                 hz = Frequency.parse(s).toHertz();
             } catch (InvalidQuantityException e) {
-                throw CommandFailure.badInput(e.getMessage(), e);
+                // Say what was read when the library's message names only the value it made of it.
+                String m = e.getMessage();
+                throw CommandFailure.badInput(m.contains(s) ? m : m + " (read from " + Messages.quote(s) + ")", e);
             }
         }
         if (!(hz >= PlanarEvaluation.MIN_HERTZ && hz <= PlanarEvaluation.MAX_HERTZ)) {

@@ -24,7 +24,7 @@ final class Messages {
     static final int NAME_LIMIT = 200;
     /** The number of code points kept from each end of a shortened file name. */
     static final int NAME_KEPT = 80;
-    /** A message longer than this many code points is cut, saying how much was left out. */
+    /** A cleaned message longer than this many characters is cut, saying how much was left out. */
     static final int MESSAGE_LIMIT = 600;
     /** A run of more digits than this is shortened, keeping its first digits and its length. */
     static final int DIGIT_RUN_LIMIT = 40;
@@ -69,33 +69,38 @@ final class Messages {
      * A message made safe for a terminal, on one line: every text in double quotes longer
      * than {@value #ECHO_LIMIT} code points shortened as {@link #abbreviate(String)} does (the
      * library's exceptions quote the input they refuse), runs of more than
-     * {@value #DIGIT_RUN_LIMIT} digits shortened, the whole cut to {@value #MESSAGE_LIMIT}
-     * code points, then every control character (C0, DEL, C1), format character
+     * {@value #DIGIT_RUN_LIMIT} digits shortened, every control character (C0, DEL, C1), format character
      * (bidirectional controls, zero-width characters, byte-order marks), line or paragraph
      * separator and unpaired surrogate written as a Java escape (&#92;u001B; tab, line
-     * feed and carriage return as {@code \t}, {@code \n}, {@code \r}).
+     * feed and carriage return as {@code \t}, {@code \n}, {@code \r}); the result is cut
+     * after {@value #MESSAGE_LIMIT} characters, saying how many were left out.
      */
     static String clean(String message) {
-        String s = cut(shortenDigitRuns(shortenQuoted(message == null ? "(no message)" : message)));
-        StringBuilder b = new StringBuilder(s.length() + 16);
+        String s = shortenDigitRuns(shortenQuoted(message == null ? "(no message)" : message));
+        StringBuilder b = new StringBuilder(Math.min(s.length(), MESSAGE_LIMIT) + 32);
         for (int i = 0; i < s.length(); ) {
             int cp = s.codePointAt(i);
             int width = Character.charCount(cp);
-            switch (cp) {
-                case '\t' -> b.append("\\t");
-                case '\n' -> b.append("\\n");
-                case '\r' -> b.append("\\r");
-                default -> {
-                    if (unsafe(cp)) {
-                        for (int k = i; k < i + width; k++) {
-                            b.append(String.format(Locale.ROOT, "\\u%04X", (int) s.charAt(k)));
-                        }
-                    } else {
-                        b.appendCodePoint(cp);
-                    }
-                }
+            String piece = switch (cp) {
+                case '\t' -> "\\t";
+                case '\n' -> "\\n";
+                case '\r' -> "\\r";
+                default -> unsafe(cp) ? escape(s, i, width) : s.substring(i, i + width);
+            };
+            if (b.length() + piece.length() > MESSAGE_LIMIT) {
+                return b.append("... (").append(s.codePointCount(i, s.length())).append(" more characters)")
+                        .toString();
             }
+            b.append(piece);
             i += width;
+        }
+        return b.toString();
+    }
+
+    private static String escape(String s, int from, int width) {
+        StringBuilder b = new StringBuilder(6 * width);
+        for (int k = from; k < from + width; k++) {
+            b.append(String.format(Locale.ROOT, "\\u%04X", (int) s.charAt(k)));
         }
         return b.toString();
     }
@@ -105,15 +110,6 @@ final class Messages {
         int type = Character.getType(cp);
         return type == Character.CONTROL || type == Character.FORMAT || type == Character.SURROGATE
                 || type == Character.LINE_SEPARATOR || type == Character.PARAGRAPH_SEPARATOR;
-    }
-
-    private static String cut(String s) {
-        int n = s.codePointCount(0, s.length());
-        if (n <= MESSAGE_LIMIT) {
-            return s;
-        }
-        return s.substring(0, s.offsetByCodePoints(0, MESSAGE_LIMIT)) + "... (" + (n - MESSAGE_LIMIT)
-                + " more characters)";
     }
 
     private static String shortenQuoted(String s) {
