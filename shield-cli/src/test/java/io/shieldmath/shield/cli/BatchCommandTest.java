@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.examples;
+package io.shieldmath.shield.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -16,6 +16,7 @@ import io.shieldmath.shield.quantity.Length;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -24,7 +25,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-class ShieldBatchTest {
+class BatchCommandTest {
 
     static final String DESIGN = """
             {
@@ -42,11 +43,19 @@ class ShieldBatchTest {
     }
 
     static Run run(String stdin, String... args) {
+        return run(new ByteArrayInputStream(stdin.getBytes(StandardCharsets.UTF_8)), args);
+    }
+
+    static Run run(InputStream stdin, String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = ShieldBatch.run(args, new ByteArrayInputStream(stdin.getBytes(StandardCharsets.UTF_8)),
-                new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8));
+        int code = BatchCommand.run(args, stdin, out, new PrintStream(err, true, StandardCharsets.UTF_8));
         return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    }
+
+    /** The design file {@link #DESIGN} in a directory. */
+    static Path design(Path dir) throws IOException {
+        return write(dir, "d.json", DESIGN);
     }
 
     static Path write(Path dir, String name, String text) throws IOException {
@@ -85,7 +94,7 @@ class ShieldBatchTest {
     void malformedJsonNamesItsLocation(@TempDir Path dir) throws IOException {
         Path design = write(dir, "bad.json", DESIGN.replace("\"0.5 mm\" }", "\"0.5 mm\" "));
         Run r = run("", "--design", design.toString());
-        assertEquals(ShieldBatch.BAD_INPUT, r.code());
+        assertEquals(BatchCommand.BAD_INPUT, r.code());
         assertTrue(r.err().contains("line"), r.err());
         assertTrue(r.out().isEmpty());
     }
@@ -94,7 +103,7 @@ class ShieldBatchTest {
     void unknownMaterialNamesItsJsonPath(@TempDir Path dir) throws IOException {
         Path design = write(dir, "d.json", DESIGN.replace("copper-annealed", "unobtainium"));
         Run r = run("", "--design", design.toString());
-        assertEquals(ShieldBatch.BAD_INPUT, r.code());
+        assertEquals(BatchCommand.BAD_INPUT, r.code());
         assertTrue(r.err().contains("$.layers[0].material"), r.err());
         assertTrue(r.err().contains("unobtainium"), r.err());
     }
@@ -103,23 +112,26 @@ class ShieldBatchTest {
     void emptyInputAndBadLinesAreErrors(@TempDir Path dir) throws IOException {
         Path design = write(dir, "d.json", DESIGN);
         Run empty = run("", "--design", design.toString(), "--stdin");
-        assertEquals(ShieldBatch.BAD_INPUT, empty.code());
+        assertEquals(BatchCommand.BAD_INPUT, empty.code());
         assertTrue(empty.err().contains("no frequencies"), empty.err());
         Run bad = run("10 kHz\nten kHz\n", "--design", design.toString(), "--stdin");
-        assertEquals(ShieldBatch.BAD_INPUT, bad.code());
+        assertEquals(BatchCommand.BAD_INPUT, bad.code());
         assertTrue(bad.err().contains("line 2"), bad.err());
         Path emptyFile = write(dir, "empty.json", "");
         Run emptyDesign = run("", "--design", emptyFile.toString());
-        assertEquals(ShieldBatch.BAD_INPUT, emptyDesign.code(), emptyDesign.err());
+        assertEquals(BatchCommand.BAD_INPUT, emptyDesign.code(), emptyDesign.err());
     }
 
     @Test
     void commandLineMistakesGiveUsage(@TempDir Path dir) throws IOException {
-        assertEquals(ShieldBatch.USAGE, run("").code());
-        assertEquals(ShieldBatch.USAGE, run("", "--design").code());
-        assertEquals(ShieldBatch.USAGE, run("", "--design", "x.json", "--format", "xml").code());
-        assertEquals(ShieldBatch.USAGE, run("", "--design", "x.json", "--wat").code());
-        assertEquals(ShieldBatch.IO_ERROR, run("", "--design", dir.resolve("missing.json").toString()).code());
+        assertEquals(BatchCommand.USAGE, run("").code());
+        assertEquals(BatchCommand.USAGE, run("", "--design").code());
+        assertEquals(BatchCommand.USAGE, run("", "--design", "x.json", "--format", "xml").code());
+        assertEquals(BatchCommand.USAGE, run("", "--design", "x.json", "--wat").code());
+        Run missing = run("", "--design", dir.resolve("missing.json").toString());
+        assertEquals(BatchCommand.IO_ERROR, missing.code());
+        assertTrue(missing.err().contains("cannot read design file " + dir.resolve("missing.json") + ": no such file"),
+                missing.err());
         Path design = write(dir, "d.json", DESIGN);
         Run band = run("", "--design", design.toString(), "--band", "10 Hz to 1 kHz", "--points", "3");
         assertEquals(0, band.code(), band.err());

@@ -1,0 +1,316 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.cli;
+
+import io.shieldmath.shield.materials.Catalogue;
+import io.shieldmath.shield.materials.files.Design;
+import io.shieldmath.shield.materials.files.CatalogueFile;
+import io.shieldmath.shield.materials.files.DesignFile;
+import io.shieldmath.shield.materials.files.MaterialFileException;
+import io.shieldmath.shield.planar.PlanarEvaluation;
+import io.shieldmath.shield.planar.PlanarResult;
+import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.FrequencyBand;
+import io.shieldmath.shield.quantity.InvalidQuantityException;
+import java.io.FileDescriptor;
+import java.io.FileOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.io.PrintStream;
+import java.io.UncheckedIOException;
+import java.util.Objects;
+
+/**
+ * The {@code shield-batch} command, for instrument software and scripts: evaluates a JSON
+ * design file at frequencies and prints CSV or JSON to standard output.
+ *
+ * <pre>
+ * shield-batch --design FILE [--catalogue FILE] [--band "10 Hz to 100 kHz" --points N | --stdin]
+ *              [--format csv|json]
+ * </pre>
+ *
+ * <p>Run it with {@code java -jar shield-all.jar ...} (the shaded jar of shield-examples) or
+ * {@code java -cp ... io.shieldmath.shield.cli.BatchCommand ...}.
+ *
+ * <p>Without {@code --band} or {@code --stdin} the design's own band and points are used;
+ * {@code --points} alone uses the design's band, {@code --band} alone the design's points.
+ * With {@code --stdin}, each line holds one frequency ({@code "10 kHz"}, or a plain decimal
+ * number in Hz such as {@code 50000} or {@code 2.5e4}); blank lines and lines starting with
+ * {@code #} are skipped, and one byte-order mark at the start is skipped. Standard input is
+ * read as a stream: each line is answered before the next is read, in bounded memory, and
+ * the output is flushed whenever the command would wait for more input.
+ *
+ * <p>Limits, each checked before anything is allocated for it: {@code --points} from 1 to
+ * {@value #MAX_POINTS}; a line of standard input, and the {@code --band} text, at most
+ * {@value #MAX_LINE_CHARS} characters; at most {@value #MAX_INPUT_LINES} lines of standard
+ * input (blank and comment lines included). Design and catalogue files must be regular files
+ * (not a directory, named pipe or device) and are limited by their reader.
+ *
+ * <p>Messages go to standard error, one line each, starting {@code "shield-batch: "}, with
+ * the file, line or JSON path at fault. Input echoed in them is shortened to its first
+ * characters and its length, and control characters are written as Java escapes such as
+ * &#92;u001B, so no input can drive the terminal.
+ *
+ * <p>Exit codes:
+ * <ul>
+ *   <li>{@value #OK} ({@link #OK}): done, every result written;</li>
+ *   <li>{@value #USAGE} ({@link #USAGE}): the command line is wrong (unknown, repeated or
+ *       incomplete option, a bad {@code --band}, {@code --points} or {@code --format}, a
+ *       forbidden combination); the usage text follows the message;</li>
+ *   <li>{@value #BAD_INPUT} ({@link #BAD_INPUT}): the design or catalogue file is not
+ *       acceptable, a line of standard input is not a frequency in range, standard input holds
+ *       no frequency or is over a limit, or the design cannot be evaluated at a frequency (an
+ *       arithmetic failure);</li>
+ *   <li>{@value #IO_ERROR} ({@link #IO_ERROR}): a file or standard input cannot be read (no
+ *       such file, not a regular file, permission denied, read error);</li>
+ *   <li>{@value #OUTPUT_ERROR} ({@link #OUTPUT_ERROR}): standard output cannot be written
+ *       (disk full, closed, or the reading program has gone, as with {@code | head -1}); the
+ *       command stops computing at once;</li>
+ *   <li>{@value #INTERNAL_ERROR} ({@link #INTERNAL_ERROR}): a fault in this program; the
+ *       message names the exception.</li>
+ * </ul>
+ * On exit codes 3 to 5 in the middle of a run, the results already computed have been
+ * written (for JSON, an unterminated document): trust the output only on exit code 0.
+ *
+ * <p>Not instantiable; {@link #run(String[], InputStream, OutputStream, PrintStream)} keeps no
+ * state between calls and may be called from several threads with different streams.
+ */
+public final class BatchCommand {
+
+    /** Exit code: done. */
+    public static final int OK = 0;
+    /** Exit code: the command line is wrong. */
+    public static final int USAGE = 2;
+    /** Exit code: the design or catalogue file, or an input line, is wrong or cannot be evaluated. */
+    public static final int BAD_INPUT = 3;
+    /** Exit code: a file or standard input could not be read. */
+    public static final int IO_ERROR = 4;
+    /** Exit code: standard output could not be written. */
+    public static final int OUTPUT_ERROR = 5;
+    /** Exit code: a fault in this program (an unexpected exception), reported in one line. */
+    public static final int INTERNAL_ERROR = 70;
+
+    /** The largest {@code --points}. */
+    public static final int MAX_POINTS = 100_000;
+    /** The most characters in one line of standard input, and in the {@code --band} text. */
+    public static final int MAX_LINE_CHARS = 1000;
+    /** The most lines read from standard input in one run. */
+    public static final long MAX_INPUT_LINES = 10_000_000L;
+
+    /** The command's name, at the start of every message. */
+    static final String NAME = "shield-batch";
+
+    /** The evaluation range in words. */
+    private static final String RANGE = "from " + ResultOutput.shortest(PlanarEvaluation.MIN_HERTZ) + " Hz to "
+            + ResultOutput.shortest(PlanarEvaluation.MAX_HERTZ) + " Hz";
+
+    private static final String USAGE_TEXT = "usage: shield-batch --design FILE [--catalogue FILE] "
+            + "[--band \"10 Hz to 100 kHz\" --points N | --stdin] [--format csv|json]";
+
+    private BatchCommand() {
+    }
+
+    /**
+     * Runs the command on the process's standard streams and exits with its exit code.
+     * Standard output is written through its file descriptor, so that a write failure is seen
+     * (through {@link System#out} it would be recorded and ignored).
+     *
+     * @param args the command line
+     */
+    public static void main(String[] args) {
+        int code = run(args, System.in, new FileOutputStream(FileDescriptor.out), System.err);
+        System.err.flush();
+        System.exit(code);
+    }
+
+    /**
+     * Runs the command. Nothing is closed; {@code out} is flushed. A {@link PrintStream} given
+     * as {@code out} is asked {@link PrintStream#checkError()} after each block written, so its
+     * failures count too.
+     *
+     * @param args the command line, not null
+     * @param in   standard input, read only with {@code --stdin}, not null
+     * @param out  standard output, for results, not null
+     * @param err  standard error, for messages, not null
+     * @return the exit code, one of {@link #OK}, {@link #USAGE}, {@link #BAD_INPUT},
+     *         {@link #IO_ERROR}, {@link #OUTPUT_ERROR} and {@link #INTERNAL_ERROR}
+     * @throws NullPointerException if an argument is null
+     */
+    public static int run(String[] args, InputStream in, OutputStream out, PrintStream err) {
+        Objects.requireNonNull(args, "args");
+        Objects.requireNonNull(in, "in");
+        Objects.requireNonNull(out, "out");
+        Objects.requireNonNull(err, "err");
+        try {
+            execute(Options.parse(args), in, out);
+            return OK;
+        } catch (CommandFailure f) {
+            err.println(NAME + ": " + Messages.clean(f.getMessage()));
+            if (f.exitCode() == USAGE) {
+                err.println(USAGE_TEXT);
+            }
+            return f.exitCode();
+        } catch (RuntimeException e) {
+            err.println(NAME + ": internal error, please report it: " + Messages.clean(e.toString()));
+            return INTERNAL_ERROR;
+        }
+    }
+
+    private static void execute(Options o, InputStream in, OutputStream out) throws CommandFailure {
+        FrequencyBand band = o.band() == null ? null : band(o.band());
+        Design design = readDesign(o);
+        PlanarEvaluation evaluation;
+        try {
+            evaluation = design.barrier().facing(design.field());
+        } catch (IllegalArgumentException e) {
+            throw CommandFailure.badInput("design file " + Messages.fileName(o.design()) + ": " + e.getMessage(), e);
+        }
+        ResultOutput output = new ResultOutput(out, o.json(), design.title(), design.field().toString());
+        try {
+            if (o.stdin()) {
+                fromStandardInput(evaluation, new LineInput(in, output::flush), output);
+            } else {
+                FrequencyBand b = band != null ? band : design.band();
+                int points = o.points() > 0 ? o.points() : design.points();
+                for (double hz : b.logSpacedHertz(points)) {
+                    output.write(evaluate(evaluation, hz));
+                }
+            }
+            output.finish();
+        } catch (CommandFailure f) {
+            if (f.exitCode() != OUTPUT_ERROR) {
+                flushQuietly(output);
+            }
+            throw f;
+        }
+    }
+
+    private static void fromStandardInput(PlanarEvaluation evaluation, LineInput lines, ResultOutput output)
+            throws CommandFailure {
+        String line;
+        while ((line = lines.next()) != null) {
+            String s = line.strip();
+            if (s.isEmpty() || s.startsWith("#")) {
+                continue;
+            }
+            double hz;
+            try {
+                hz = frequencyHertz(s);
+            } catch (CommandFailure f) {
+                throw CommandFailure.badInput("standard input line " + lines.lineNumber() + ": " + f.getMessage(),
+                        f);
+            }
+            output.write(evaluate(evaluation, hz));
+        }
+        if (output.count() == 0) {
+            throw CommandFailure.badInput("no frequencies on standard input", null);
+        }
+    }
+
+    /**
+     * A frequency in Hz from one line of input: a plain decimal number in Hz, or a number and a
+     * unit as {@link Frequency#parse(CharSequence)} reads them; within the evaluation range.
+     */
+    static double frequencyHertz(String s) throws CommandFailure {
+        double hz;
+        if (plainNumber(s)) {
+            try {
+                hz = Double.parseDouble(s);
+            } catch (NumberFormatException e) {
+                throw CommandFailure.badInput("frequency: cannot read " + Messages.quote(s)
+                        + " as a number in Hz; expected for example 50000, 2.5e4 or \"25 kHz\"", e);
+            }
+        } else {
+            try {
+                hz = Frequency.parse(s).toHertz();
+            } catch (InvalidQuantityException e) {
+                // Say what was read when the library's message names only the value it made of it.
+                String m = e.getMessage();
+                throw CommandFailure.badInput(m.contains(s) ? m : m + " (read from " + Messages.quote(s) + ")", e);
+            }
+        }
+        if (!(hz >= PlanarEvaluation.MIN_HERTZ && hz <= PlanarEvaluation.MAX_HERTZ)) {
+            throw CommandFailure.badInput("frequency: " + Messages.quote(s) + " is out of range; allowed: "
+                    + RANGE, null);
+        }
+        return hz;
+    }
+
+    /**
+     * Whether a line is meant as a plain number in Hz: it starts like a number and holds only
+     * digits, signs, points and exponent letters, so {@link Double#parseDouble(String)} cannot
+     * take a hexadecimal form, {@code NaN}, {@code Infinity}, a type suffix or white space.
+     */
+    private static boolean plainNumber(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            boolean digit = c >= '0' && c <= '9';
+            if (!(digit || c == '+' || c == '-' || c == '.' || (i > 0 && (c == 'e' || c == 'E')))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static FrequencyBand band(String text) throws CommandFailure {
+        FrequencyBand b;
+        try {
+            b = FrequencyBand.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw CommandFailure.usage("--band: " + e.getMessage());
+        }
+        double low = b.low().toHertz();
+        double high = b.high().toHertz();
+        if (!(low >= PlanarEvaluation.MIN_HERTZ && high <= PlanarEvaluation.MAX_HERTZ)) {
+            throw CommandFailure.usage("--band: the " + (low < PlanarEvaluation.MIN_HERTZ ? "lower" : "upper")
+                    + " end of " + Messages.quote(text) + " is out of range; allowed: " + RANGE);
+        }
+        return b;
+    }
+
+    private static Design readDesign(Options o) throws CommandFailure {
+        Catalogue catalogue = Catalogue.builtIn();
+        if (o.catalogue() != null) {
+            String name = "catalogue file " + Messages.fileName(o.catalogue());
+            try (InputStream in = InputFiles.open("catalogue file", o.catalogue())) {
+                catalogue = catalogue.extendedWith(CatalogueFile.read(in));
+            } catch (MaterialFileException | IllegalArgumentException e) {
+                throw CommandFailure.badInput("bad " + name + ": " + e.getMessage(), e);
+            } catch (UncheckedIOException e) {
+                throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e.getCause()), e);
+            } catch (IOException e) {
+                throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e), e);
+            }
+        }
+        String name = "design file " + Messages.fileName(o.design());
+        try (InputStream in = InputFiles.open("design file", o.design())) {
+            return DesignFile.read(in, catalogue);
+        } catch (MaterialFileException | IllegalArgumentException e) {
+            throw CommandFailure.badInput("bad " + name + ": " + e.getMessage(), e);
+        } catch (UncheckedIOException e) {
+            throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e.getCause()), e);
+        } catch (IOException e) {
+            throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e), e);
+        }
+    }
+
+    private static PlanarResult evaluate(PlanarEvaluation evaluation, double hz)
+            throws CommandFailure {
+        try {
+            return evaluation.at(Frequency.ofHertz(hz));
+        } catch (ArithmeticException | IllegalArgumentException e) {
+            throw CommandFailure.badInput("cannot evaluate the design at " + ResultOutput.shortest(hz) + " Hz: "
+                    + e.getMessage(), e);
+        }
+    }
+
+    private static void flushQuietly(ResultOutput output) {
+        try {
+            output.flush();
+        } catch (CommandFailure ignored) {
+            // The first failure is the one reported.
+        }
+    }
+}

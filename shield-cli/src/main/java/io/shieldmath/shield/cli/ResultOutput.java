@@ -1,0 +1,191 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.cli;
+
+import io.shieldmath.shield.planar.PlanarResult;
+import java.io.BufferedWriter;
+import java.io.FilterOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.PrintStream;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.util.Locale;
+
+/**
+ * Results written to standard output as they are computed, in CSV or JSON, through a writer
+ * whose failures are reported, never swallowed.
+ *
+ * <p>A full disk, a closed descriptor or a reader that went away ({@code | head -1}) makes the
+ * next write or flush fail; that failure becomes a {@link CommandFailure} with exit code
+ * {@link BatchCommand#OUTPUT_ERROR}, so the command stops computing at once. Output is
+ * buffered ({@value #BUFFER_CHARS} characters), so at most one buffer of results is computed
+ * after the reader has gone. A {@link PrintStream} target, which records errors instead of
+ * throwing them, is asked {@link PrintStream#checkError()} after every block written to it.
+ *
+ * <p>The header (the CSV column names, or the JSON opening) is written with the first result,
+ * so a command that fails before any result writes nothing. Every number is checked finite
+ * before it is written.
+ */
+final class ResultOutput {
+
+    /** The size of the output buffer, in characters. */
+    static final int BUFFER_CHARS = 8192;
+
+    /** The CSV header line. */
+    static final String CSV_HEADER = "frequency_hz,se_db,absorption_db,reflection_db,multiple_reflection_db";
+
+    private final Writer writer;
+    private final boolean json;
+    private final String title;
+    private final String field;
+    private long count;
+
+    /**
+     * An output.
+     *
+     * @param out   the stream; not closed by this class
+     * @param json  true for JSON, false for CSV
+     * @param title the design's title for the JSON form, or null
+     * @param field the incident field's description for the JSON form
+     */
+    ResultOutput(OutputStream out, boolean json, String title, String field) {
+        this.writer = new BufferedWriter(new OutputStreamWriter(new Checked(out), StandardCharsets.UTF_8),
+                BUFFER_CHARS);
+        this.json = json;
+        this.title = title;
+        this.field = field;
+    }
+
+    /** Writes one result, after the header if it is the first. */
+    void write(PlanarResult r) throws CommandFailure {
+        double hz = r.frequency().toHertz();
+        double se = finite("shielding effectiveness", r.shieldingEffectivenessDb(), hz);
+        double a = finite("absorption", r.absorptionDb(), hz);
+        double re = finite("reflection", r.reflectionDb(), hz);
+        double b = finite("multiple-reflection correction", r.multipleReflectionDb(), hz);
+        try {
+            if (json) {
+                writer.write(count > 0 ? ",\n" : "{\n  \"design\": " + jsonString(title) + ",\n  \"field\": "
+                        + jsonString(field) + ",\n  \"results\": [\n");
+                writer.write(String.format(Locale.ROOT, "    {\"frequency_hz\": %s, \"se_db\": %.6f, "
+                        + "\"absorption_db\": %.6f, \"reflection_db\": %.6f, \"multiple_reflection_db\": %.6f}",
+                        shortest(hz), se, a, re, b));
+            } else {
+                if (count == 0) {
+                    writer.write(CSV_HEADER);
+                    writer.write('\n');
+                }
+                writer.write(String.format(Locale.ROOT, "%s,%.6f,%.6f,%.6f,%.6f\n", shortest(hz), se, a, re, b));
+            }
+        } catch (IOException e) {
+            throw failed(e);
+        }
+        count++;
+    }
+
+    /** The number of results written so far (some may still be in the buffer). */
+    long count() {
+        return count;
+    }
+
+    /** Writes the end of the document (JSON) and flushes. */
+    void finish() throws CommandFailure {
+        try {
+            if (json && count > 0) {
+                writer.write("\n  ]\n}\n");
+            }
+        } catch (IOException e) {
+            throw failed(e);
+        }
+        flush();
+    }
+
+    /** Writes out everything buffered. */
+    void flush() throws CommandFailure {
+        try {
+            writer.flush();
+        } catch (IOException e) {
+            throw failed(e);
+        }
+    }
+
+    private CommandFailure failed(IOException e) {
+        return CommandFailure.unwritable("cannot write standard output: " + InputFiles.reason(e)
+                + "; stopped after " + count + (count == 1 ? " result" : " results"), e);
+    }
+
+    private static double finite(String what, double value, double hz) throws CommandFailure {
+        if (!Double.isFinite(value)) {
+            throw CommandFailure.badInput("the design's " + what + " at " + shortest(hz) + " Hz is " + value
+                    + ", not a finite number of dB; nothing more is computed", null);
+        }
+        return value;
+    }
+
+    /** The shortest text that reads back to the same double, with a lower-case exponent. */
+    static String shortest(double v) {
+        return Double.toString(v).replace("E", "e");
+    }
+
+    /** A JSON string literal. */
+    static String jsonString(String s) {
+        StringBuilder b = new StringBuilder("\"");
+        for (char c : (s == null ? "" : s).toCharArray()) {
+            switch (c) {
+                case '"' -> b.append("\\\"");
+                case '\\' -> b.append("\\\\");
+                case '\n' -> b.append("\\n");
+                case '\r' -> b.append("\\r");
+                case '\t' -> b.append("\\t");
+                default -> {
+                    if (c < 0x20 || c == 0x7F || c == '\u2028' || c == '\u2029') {
+                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+                    } else {
+                        b.append(c);
+                    }
+                }
+            }
+        }
+        return b.append('"').toString();
+    }
+
+    /** Passes writes on and turns a {@link PrintStream}'s recorded error into an exception. */
+    private static final class Checked extends FilterOutputStream {
+
+        Checked(OutputStream out) {
+            super(out);
+        }
+
+        @Override
+        public void write(byte[] b, int off, int len) throws IOException {
+            out.write(b, off, len);
+            check();
+        }
+
+        @Override
+        public void write(int b) throws IOException {
+            out.write(b);
+            check();
+        }
+
+        @Override
+        public void flush() throws IOException {
+            out.flush();
+            check();
+        }
+
+        @Override
+        public void close() throws IOException {
+            flush();
+        }
+
+        private void check() throws IOException {
+            if (out instanceof PrintStream p && p.checkError()) {
+                throw new IOException("write error");
+            }
+        }
+    }
+}
