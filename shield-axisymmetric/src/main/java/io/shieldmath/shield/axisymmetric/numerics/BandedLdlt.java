@@ -28,7 +28,8 @@ package io.shieldmath.shield.axisymmetric.numerics;
  *       with positive definite real and imaginary parts", Math. Comp. 67 (1998) 1591–1599,
  *       bounds the growth when the imaginary part is definite too. Ours is only semidefinite
  *       (air carries no eddy current), so the caller measures the residual and refines;</li>
- *   <li>the reciprocal of each pivot is kept, so the inner loops multiply and never divide.</li>
+ *   <li>the reciprocal of each pivot is kept, so the inner loops multiply and never divide;</li>
+ *   <li>the dot products run two accumulators per part (see the comment in {@link #factor}).</li>
  * </ul>
  * Cost: about n·b²/2 complex multiply-adds (4 real multiplications and 4 additions each)
  * for n unknowns and half-bandwidth b, and n·(b+1) storage per part.
@@ -61,20 +62,42 @@ public final class BandedLdlt {
                 final int rk = k * w;
                 // u_ik = A_ik − Σ_{m = max(k0, k−b)}^{k−1} u_im · L_km
                 final int m0 = Math.max(k0, k - b);
-                double sr = re[ri + k - i + b];
-                double si = im[ri + k - i + b];
+                // Two independent accumulators per part: a single running sum is bound by the
+                // latency of one floating-point add per term; two halve that (the JIT does not
+                // reassociate floating-point sums itself). The order of summation changes, not
+                // the count of operations, so the rounding error bound is the same.
+                double sr0 = re[ri + k - i + b];
+                double si0 = im[ri + k - i + b];
+                double sr1 = 0;
+                double si1 = 0;
                 int pi = ri + m0 - i + b;
                 int pk = rk + m0 - k + b;
-                for (int m = m0; m < k; m++, pi++, pk++) {
+                final int len = k - m0;
+                final int end = pi + (len & ~1);
+                for (; pi < end; pi += 2, pk += 2) {
                     final double ar = re[pi];
                     final double ai = im[pi];
                     final double br = re[pk];
                     final double bi = im[pk];
-                    sr -= ar * br - ai * bi;
-                    si -= ar * bi + ai * br;
+                    final double cr = re[pi + 1];
+                    final double ci = im[pi + 1];
+                    final double dr = re[pk + 1];
+                    final double di = im[pk + 1];
+                    sr0 -= ar * br - ai * bi;
+                    si0 -= ar * bi + ai * br;
+                    sr1 -= cr * dr - ci * di;
+                    si1 -= cr * di + ci * dr;
                 }
-                re[ri + k - i + b] = sr;
-                im[ri + k - i + b] = si;
+                if ((len & 1) != 0) {
+                    final double ar = re[pi];
+                    final double ai = im[pi];
+                    final double br = re[pk];
+                    final double bi = im[pk];
+                    sr0 -= ar * br - ai * bi;
+                    si0 -= ar * bi + ai * br;
+                }
+                re[ri + k - i + b] = sr0 + sr1;
+                im[ri + k - i + b] = si0 + si1;
             }
             // D_i = A_ii − Σ_m u_im · (u_im / D_m), and L_im = u_im / D_m (1/D_m is stored).
             double dr = re[ri + b];
@@ -166,13 +189,20 @@ public final class BandedLdlt {
             final int k0 = Math.max(0, i - b);
             for (int k = k0; k < i; k++) {
                 final int m0 = Math.max(k0, k - b);
-                double s = re[ri + k - i + b];
+                double s0 = re[ri + k - i + b];
+                double s1 = 0;
                 int pi = ri + m0 - i + b;
                 int pk = k * w + m0 - k + b;
-                for (int m = m0; m < k; m++, pi++, pk++) {
-                    s -= re[pi] * re[pk];
+                final int len = k - m0;
+                final int end = pi + (len & ~1);
+                for (; pi < end; pi += 2, pk += 2) {
+                    s0 -= re[pi] * re[pk];
+                    s1 -= re[pi + 1] * re[pk + 1];
                 }
-                re[ri + k - i + b] = s;
+                if ((len & 1) != 0) {
+                    s0 -= re[pi] * re[pk];
+                }
+                re[ri + k - i + b] = s0 + s1;
             }
             double d = re[ri + b];
             for (int m = k0; m < i; m++) {

@@ -26,7 +26,8 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * design frequency, q the fineness), at most a quarter of the body's thickness, and grows by
  * at most 1 + 0.2/q per element into metal and air; through a conductor's thickness no
  * element exceeds δ/(12q); coils ask for a/(24q) (a their radius);
- * the near region is capped at E/(15q) with E the geometry's half-extent; the far boundary
+ * the near region is capped at E/(15q) with E the geometry's half-extent, the sensor region
+ * at half that; the far boundary
  * is a box of {@code boxFactor}·E about the geometry's centre.
  *
  * <p>Numbering: interior nodes only, along the grid's shorter side first, so the
@@ -173,13 +174,24 @@ public final class Mesh {
             zr.add(layout.coilR0[i], layout.coilR1[i], h);
             zz.add(layout.coilZ0[i], layout.coilZ1[i], h);
         }
+        // The sensor region (the span of the extra lines) is meshed at half the near-region size.
+        double sensorR = 0;
         for (double r : layout.keyR) {
             kr[nkr++] = r;
-            zr.add(r, r, hNear / 2);
+            sensorR = Math.max(sensorR, r);
         }
+        if (sensorR > 0) {
+            zr.add(0, sensorR, hNear / 2);
+        }
+        double sensorLo = Double.POSITIVE_INFINITY;
+        double sensorHi = Double.NEGATIVE_INFINITY;
         for (double z : layout.keyZ) {
             kz[nkz++] = z;
-            zz.add(z, z, hNear / 2);
+            sensorLo = Math.min(sensorLo, z);
+            sensorHi = Math.max(sensorHi, z);
+        }
+        if (layout.keyZ.length > 0) {
+            zz.add(sensorLo, sensorHi, hNear / 2);
         }
         rl = GridLines.build(0, boxR, java.util.Arrays.copyOf(kr, nkr), zr.lo(), zr.hi(), zr.h(), growth);
         zl = GridLines.build(boxZ0, boxZ1, java.util.Arrays.copyOf(kz, nkz), zz.lo(), zz.hi(), zz.h(), growth);
