@@ -126,7 +126,6 @@ class CoupledCircuitDiscTest {
             double expected = Math.pow(hz[i] / hz[i - 1], 2);
             assertEquals(expected, err[i] / err[i - 1], 0.05 * expected, table.toString());
         }
-        System.out.println(table);
         DiscCouplingResult r1 = aluminium.at(1);
         assertEquals(1, r1.insertionLossDb() / (c2 * Math.pow(2 * Math.PI, 2)), 1e-4);
         // First order: Im M_sh → −ω·α·M0.

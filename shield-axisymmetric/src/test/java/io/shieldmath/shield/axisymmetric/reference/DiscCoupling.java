@@ -4,11 +4,6 @@
 package io.shieldmath.shield.axisymmetric.reference;
 
 import io.shieldmath.shield.quantity.Require;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.DecompositionSolver;
-import org.apache.commons.math3.linear.LUDecomposition;
-import org.apache.commons.math3.linear.RealVector;
 
 /**
  * A coupled-circuit disc between a transmitting and a receiving coil, with its
@@ -20,10 +15,10 @@ import org.apache.commons.math3.linear.RealVector;
  * <p>At angular frequency ω, with drive current I in the transmitter (peak phasor, e^{jωt}),
  * the cell currents solve (R + jωL)·i = −jω·m·I (Kirchhoff's voltage law around each cell, no
  * source but the induced e.m.f.), the receiver links M_shielded·I = M0·I + nᵀ·i, and the
- * transmitter's impedance changes by ΔZ = jω·mᵀ·i/I. The complex system is solved as the real
- * system [[R, −ωL], [ωL, R]]·[x; y] = [0; −ω·m] (i = x + jy per ampere) by Commons Math's
- * {@link LUDecomposition} with partial pivoting, after dividing by the largest diagonal entry
- * (Commons Math's singularity threshold is absolute).
+ * transmitter's impedance changes by ΔZ = jω·mᵀ·i/I. The complex system (per ampere, divided by
+ * its largest diagonal modulus) is solved by Gaussian elimination with partial pivoting
+ * ({@link ComplexLu}, checked against Commons Math's real LU of the equivalent system
+ * [[R, −ωL], [ωL, R]]·[x; y] = [0; −ω·m] in {@code ComplexLuTest}).
  *
  * <p>Immutable and thread-safe (the arrays are never exposed, only copies).
  */
@@ -128,23 +123,23 @@ public final class DiscCoupling {
                 r[k] = resistanceFactor[k] / sigma;
                 scale = Math.max(scale, r[k] + w * inductance[k][k]);
             }
-            double[][] a = new double[2 * n][2 * n];
-            double[] b = new double[2 * n];
+            double[] ar = new double[n * n];
+            double[] ai = new double[n * n];
+            double[] br = new double[n];
+            double[] bi = new double[n];
             for (int k = 0; k < n; k++) {
-                a[k][k] = r[k] / scale;
-                a[n + k][n + k] = r[k] / scale;
                 for (int q = 0; q < n; q++) {
-                    double wl = w * inductance[k][q] / scale;
-                    a[k][n + q] = -wl;
-                    a[n + k][q] = wl;
+                    ai[k * n + q] = w * inductance[k][q] / scale;
                 }
-                b[n + k] = -w * txCoupling[k] / scale;
+                ar[k * n + k] = r[k] / scale;
+                bi[k] = -w * txCoupling[k] / scale;
             }
-            DecompositionSolver solver = new LUDecomposition(new Array2DRowRealMatrix(a, false), 1e-300).getSolver();
-            RealVector s = solver.solve(new ArrayRealVector(b, false));
+            if (!ComplexLu.solve(ar, ai, br, bi)) {
+                throw new IllegalStateException("the cell equations are singular at " + hz + " Hz for " + disc);
+            }
             for (int k = 0; k < n; k++) {
-                x[k] = s.getEntry(k);
-                y[k] = s.getEntry(n + k);
+                x[k] = br[k];
+                y[k] = bi[k];
                 if (!Double.isFinite(x[k]) || !Double.isFinite(y[k])) {
                     throw new IllegalStateException("the cell currents are not finite at " + hz + " Hz for " + disc);
                 }
