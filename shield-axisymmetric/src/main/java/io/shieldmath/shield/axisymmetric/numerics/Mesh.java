@@ -27,7 +27,7 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * at most 1 + 0.2/q per element into metal and air; through a conductor's thickness no
  * element exceeds δ/(12q); coils ask for a/(24q) (a their radius);
  * the near region is capped at E/(15q) with E the geometry's half-extent, the sensor region
- * at half that; the far boundary
+ * at a quarter of that; the far boundary
  * is a box of {@code boxFactor}·E about the geometry's centre.
  *
  * <p>Numbering: interior nodes only, along the grid's shorter side first, so the
@@ -174,14 +174,14 @@ public final class Mesh {
             zr.add(layout.coilR0[i], layout.coilR1[i], h);
             zz.add(layout.coilZ0[i], layout.coilZ1[i], h);
         }
-        // The sensor region (the span of the extra lines) is meshed at half the near-region size.
+        // The sensor region (the span of the extra lines) is meshed at a quarter of the near-region size.
         double sensorR = 0;
         for (double r : layout.keyR) {
             kr[nkr++] = r;
             sensorR = Math.max(sensorR, r);
         }
         if (sensorR > 0) {
-            zr.add(0, sensorR, hNear / 2);
+            zr.add(0, sensorR, hNear / 4);
         }
         double sensorLo = Double.POSITIVE_INFINITY;
         double sensorHi = Double.NEGATIVE_INFINITY;
@@ -191,7 +191,7 @@ public final class Mesh {
             sensorHi = Math.max(sensorHi, z);
         }
         if (layout.keyZ.length > 0) {
-            zz.add(sensorLo, sensorHi, hNear / 2);
+            zz.add(sensorLo, sensorHi, hNear / 4);
         }
         rl = GridLines.build(0, boxR, java.util.Arrays.copyOf(kr, nkr), zr.lo(), zr.hi(), zr.h(), growth);
         zl = GridLines.build(boxZ0, boxZ1, java.util.Arrays.copyOf(kz, nkz), zz.lo(), zz.hi(), zz.h(), growth);
