@@ -21,5 +21,5 @@ module io.shieldmath.shield.core {
     exports io.shieldmath.shield.bench;
 
     // Engine kernels, argument checks and text helpers shared by this library's own modules only.
-    exports io.shieldmath.shield.internal to io.shieldmath.shield.materials;
+    exports io.shieldmath.shield.internal to io.shieldmath.shield.materials, io.shieldmath.shield.axisymmetric;
 }

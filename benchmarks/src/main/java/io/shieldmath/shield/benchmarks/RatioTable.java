@@ -200,6 +200,55 @@ public final class RatioTable {
                         grouped(np), fixed(pps / np, 1)),
                 () -> out.println("NumPy: not measured in this run (see numpy_sweep.py)."));
         });
+        printAxisymmetric(out);
+    }
+
+    /** The axisymmetric solver's targets: converged point, sweep, scaling exponent and the baseline ratio. */
+    private void printAxisymmetric(PrintStream out) {
+        String base = "AxisymmetricBenchmark.";
+        Optional<Row> point = find(base + "convergedPoint");
+        Optional<Row> sweep = find(base + "sweep20");
+        if (point.isEmpty() && sweep.isEmpty()) {
+            return;
+        }
+        out.println();
+        out.println("| axisymmetric solver | measured | verdict |");
+        out.println("|---|---|---|");
+        point.ifPresent(r -> out.printf(Locale.ROOT, "| one frequency converged to 0.1 dB, ≤ 1 s | %.3f s | %s |%n",
+                r.nanosPerOp() * 1e-9, r.nanosPerOp() <= 1e9 ? "met" : "not met"));
+        sweep.ifPresent(r -> out.printf(Locale.ROOT, "| 20-frequency sweep on one mesh, ≤ 10 s | %.3f s | %s |%n",
+                r.nanosPerOp() * 1e-9, r.nanosPerOp() <= 1e10 ? "met" : "not met"));
+        String[] q = {"0.5", "0.707", "1", "1.414", "2"};
+        double sx = 0;
+        double sy = 0;
+        double sxx = 0;
+        double sxy = 0;
+        int m = 0;
+        StringBuilder scaling = new StringBuilder();
+        for (String f : q) {
+            Optional<Row> r = find(base + "banded [fineness=" + f + "]");
+            if (r.isPresent()) {
+                int n = AxisymmetricBenchmark.unknowns(Double.parseDouble(f));
+                double x = Math.log(n);
+                double y = Math.log(r.get().nanosPerOp());
+                sx += x;
+                sy += y;
+                sxx += x * x;
+                sxy += x * y;
+                m++;
+                scaling.append(String.format(Locale.ROOT, "| fineness %s: %d unknowns | %.1f ms | |%n", f, n,
+                        r.get().nanosPerOp() * 1e-6));
+            }
+        }
+        out.print(scaling);
+        if (m >= 2) {
+            double slope = (m * sxy - sx * sy) / (m * sxx - sx * sx);
+            out.printf(Locale.ROOT, "| solve time ∝ n^p, fitted p (banded: about 2 expected, n·b² with b ∝ √n) | %.2f | |%n",
+                    slope);
+        }
+        ratio(find(base + "baseline"), find(base + "banded [fineness=1]")).ifPresent(r -> out.printf(Locale.ROOT,
+                "| shorter-side numbering against longer-side numbering (the baseline), fineness 1 | %.2f× faster | %s |%n",
+                r, r > 1 ? "met" : "not met"));
     }
 
     /** a.nanos / b.nanos: how many times slower a is than b. */
