@@ -13,7 +13,7 @@ import java.util.Locale;
  * without and with the plate, each with its reading uncertainty, gives the measured loss
  * 20·log10(V_without/V_with) and its worst-case interval
  * [20·log10((V0 − u0)/(V1 + u1)), 20·log10((V0 + u0)/(V1 − u1))]; the verdict says whether the
- * model's infinite-sheet value lies inside it (DOMAIN §4).
+ * model's infinite-sheet value lies inside it. A finite plate lets flux round its rim, so a reading below the infinite-sheet value is expected (common practice, no source); one above it is a warning sign.
  *
  * <pre>{@code
  * BenchComparison c = BenchComparison.of(

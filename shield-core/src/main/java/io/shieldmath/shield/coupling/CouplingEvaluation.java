@@ -23,7 +23,7 @@ import java.util.List;
  * quasi-static limit at any frequency.
  *
  * <p>The model (J. R. Moser, IEEE Trans. EMC 9 (1967) 6, for one sheet; any stack through
- * the chain-matrix product, DOMAIN §4):
+ * the chain-matrix product of Schelkunoff's transmission-line model; C. V. Dodd and W. E. Deeds, J. Appl. Phys. 39 (1968) 2829, for the layered-conductor integral):
  * M(ω) = µ0·π·Σ N_i·N_j·a_i·b_j ∫0^∞ J1(λa_i)·J1(λb_j)·e^{−λ(d_ij − t)}·T(λ, ω) dλ over the
  * rings of both coils, T the stack's transmission of a TE spectral wave between Z0 = jωµ0/λ
  * on both sides, with γ_i = sqrt(λ² + jωµ_iσ_i) and Z_i = jωµ_i/γ_i in layer i. Every
@@ -91,7 +91,7 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
     /**
      * The transmission-line stand-in for this case: the same barrier in the near field of a
      * magnetic source with the textbook wave impedance |Zw| = 2πf·µ0·r at r = d, the coils'
-     * centre-plane separation (DOMAIN §3). It is what a hand calculation would give; the
+     * centre-plane separation (the hand formula of H. W. Ott, Electromagnetic Compatibility Engineering, Wiley 2009, ch. 6). It is what a hand calculation would give; the
      * difference from {@link #at(Frequency)} is the size of that approximation.
      *
      * @return the planar evaluation

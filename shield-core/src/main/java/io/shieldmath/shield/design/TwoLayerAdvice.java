@@ -25,7 +25,7 @@ import java.util.Locale;
  * source it carries the full field; behind the conductor it sees the field already
  * reduced by the conductor's shielding factor S_c(f), which is large at high frequency
  * and near 1 at mains frequency. The wall flux density is estimated with the thin
- * cylindrical shell in a transverse field, B ≈ µ0·H·D/t (DOMAIN §5, an order-of-magnitude
+ * cylindrical shell in a transverse field, B ≈ µ0·H·D/t (the flux the shell gathers over its cross-section flowing along the wall, an order-of-magnitude
  * rule; the shell's diameter D is the caller's), at the low end of each band, where the
  * conductor helps least. A warning is raised above {@value #WARNING_FRACTION} of the
  * saturation flux density.

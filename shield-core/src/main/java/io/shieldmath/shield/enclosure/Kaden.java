@@ -8,7 +8,7 @@ import org.apache.commons.math3.complex.Complex;
 
 /**
  * The closed-form thin-shell factors of a single wall (H. Kaden, Wirbelströme und
- * Schirmung in der Nachrichtentechnik, Springer 1959; as quoted in DOMAIN §5), with
+ * Schirmung in der Nachrichtentechnik, Springer 1959), with
  * k = sqrt(jωµ0µrσ) (= (1+j)/δ for real µr), R the wall's mean radius, t its thickness:
  * <ul>
  *   <li>sphere: S = cosh(kt) + ⅓(kR/µr + 2µr/(kR))·sinh(kt);</li>

@@ -16,7 +16,7 @@ import java.util.Optional;
  * The flux density a static ambient field drives through each wall of a shell, against
  * the saturation flux density of the alloy.
  *
- * <p>The hand estimates (DOMAIN §5; the flux the shell gathers over its cross-section
+ * <p>The hand estimates (common practice, no source; the flux the shell gathers over its cross-section
  * flows along the wall): B ≈ µ0·H0·D/t for a long cylinder across the field,
  * B ≈ (3/2)·µ0·H0·R/t for a sphere, with D = 2R the mean diameter and t the wall
  * thickness; they are the limit µr → ∞ of a thin wall. This class reports the flux

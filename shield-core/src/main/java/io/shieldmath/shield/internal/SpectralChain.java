@@ -14,7 +14,7 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  *
  * <p>A spectral wave of radial wavenumber λ has, in layer i, γ_i = sqrt(λ² + jωµ_iσ_i) and
  * wave impedance Z_i = jωµ_i/γ_i; in air γ0 = λ, Z0 = jωµ0/λ (J. R. Moser, IEEE Trans. EMC
- * 9 (1967) 6, for one layer; the chain-matrix product as in DOMAIN §3 for a stack).
+ * 9 (1967) 6, for one layer; Schelkunoff's chain-matrix product for a stack).
  * Displacement current is neglected (quasi-static), so εr does not enter. Impedances are
  * normalised by Z0: z_i = µr_i·λ/γ_i with µr = µ' − jµ''. The stack's transmission between
  * Z0 on both sides is T = 2/(A + B + C + D) of the normalised chain matrix, and the

@@ -19,7 +19,7 @@ import io.shieldmath.shield.internal.StackArrays;
  *
  * <p>The shielding effectiveness is the insertion loss against the same thickness of
  * free space: SE = 20·log10 |T_free / T|, with T from the chain-matrix product of the
- * layers between the field's wave impedance on both sides (DOMAIN §3; S. A.
+ * layers between the field's wave impedance on both sides (S. A.
  * Schelkunoff's transmission-line view of shielding, as in Ott 2009 ch. 6). A barrier
  * of free space gives 0 dB exactly.
  *
@@ -168,7 +168,7 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
 
     /**
      * ln |T| of the same thickness of free space. A barrier made only of free space is its
-     * own reference, so its SE is exactly 0 dB (DOMAIN §2) whatever the rounding of the
+     * own reference, so its SE is exactly 0 dB (insertion loss against free space) whatever the rounding of the
      * closed form and of the layer product; any other barrier uses the closed form.
      */
     private double logFreeSpace(double hz, double zr, double zi, double logT) {
