@@ -17,7 +17,8 @@ import org.apache.commons.math3.linear.FieldMatrix;
 import org.apache.commons.math3.linear.MatrixUtils;
 
 /**
- * The baseline a Java developer would write first: the chain-matrix formulas of DOMAIN §3
+ * The baseline a Java developer would write first: the chain-matrix formulas (Schelkunoff's
+ * transmission-line model, as in H. W. Ott, Electromagnetic Compatibility Engineering, Wiley 2009, ch. 6)
  * typed in with Commons Math {@link Complex} and {@link FieldMatrix}, unscaled cosh and
  * sinh, and the free-space reference computed the same way. It allocates many small
  * objects per point and overflows for layers thicker than a few hundred nepers; the

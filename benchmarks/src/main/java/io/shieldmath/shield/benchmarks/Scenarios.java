@@ -17,7 +17,7 @@ import io.shieldmath.shield.quantity.Length;
  * The invented stacks, fields and frequencies that every planar benchmark (and
  * {@code numpy_sweep.py}) measures, kept in one place so that the library and its
  * baselines compute exactly the same thing. Demo data, not a catalogue: the material
- * values are rounded typical values (DOMAIN §6, from memory).
+ * values are rounded typical values (ASM Handbook vol. 2 and Ott 2009 table 6-1, from memory).
  *
  * <ul>
  *   <li>1 layer: 0.5 mm copper (100 % IACS);</li>
