@@ -260,6 +260,21 @@ public final class Catalogue {
     }
 
     /**
+     * The materials whose number for a property has a provenance, for example those whose
+     * conductivity was checked against a published source:
+     * {@code cat.withProvenance(MaterialProperty.CONDUCTIVITY, Provenance.CHECKED)}.
+     *
+     * @param property   the property, not null
+     * @param provenance the provenance, not null
+     * @return a new catalogue; materials without the property are left out
+     */
+    public Catalogue withProvenance(MaterialProperty property, Provenance provenance) {
+        Require.nonNull("property", property);
+        Require.nonNull("provenance", provenance);
+        return filter(m -> m.provenance(property).filter(p -> p == provenance).isPresent());
+    }
+
+    /**
      * The ferromagnetic materials (static µr of {@value Material#FERROMAGNETIC_MU} or more).
      *
      * @return a new catalogue

@@ -27,6 +27,7 @@ import java.util.EnumMap;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.regex.Pattern;
 
 /**
@@ -87,6 +88,7 @@ public final class Material implements MediumSource {
     private final Length nominalThickness;
     private final String note;
     private final Map<MaterialProperty, String> sources;
+    private final Map<MaterialProperty, TypicalRange> ranges;
     private final Medium medium;
 
     private Material(Builder b) {
@@ -110,6 +112,7 @@ public final class Material implements MediumSource {
             this.conductivity = b.conductivity;
         }
         this.sources = Collections.unmodifiableMap(s);
+        this.ranges = Collections.unmodifiableMap(new EnumMap<>(b.ranges));
         this.medium = Medium.of(name, conductivity, permeability, permittivity);
     }
 
@@ -264,6 +267,70 @@ public final class Material implements MediumSource {
     }
 
     /**
+     * How far a number can be trusted, as its source text states it ({@link Provenance#of(String)}).
+     *
+     * @param property the property, not null
+     * @return the provenance, or empty if this material does not carry that property
+     */
+    public Optional<Provenance> provenance(MaterialProperty property) {
+        return source(property).map(Provenance::of);
+    }
+
+    /**
+     * The range a published reference gives for a property beside the typical value.
+     *
+     * @param property the property, not null
+     * @return the range, or empty if none is stored
+     */
+    public Optional<TypicalRange> range(MaterialProperty property) {
+        return Optional.ofNullable(ranges.get(Require.nonNull("property", property)));
+    }
+
+    /**
+     * Every stored range.
+     *
+     * @return an unmodifiable map in {@link MaterialProperty} order, often empty
+     */
+    public Map<MaterialProperty, TypicalRange> ranges() {
+        return ranges;
+    }
+
+    /**
+     * The typical value of a property in the SI unit of its ranges
+     * ({@link TypicalRange#unit(MaterialProperty)}): σ in S/m, α in 1/K, the static µr, εr,
+     * the density in kg/m³ or the saturation in T.
+     *
+     * @param property the property, not null, not {@link MaterialProperty#SHEET_RESISTANCE}
+     * @return the value, or empty if this material does not carry that property
+     * @throws IllegalArgumentException for {@link MaterialProperty#SHEET_RESISTANCE}
+     */
+    public OptionalDouble typicalValue(MaterialProperty property) {
+        TypicalRange.unit(property);
+        return typical(property, conductivity, alpha, permeability, permittivity, density, saturation);
+    }
+
+    private static OptionalDouble typical(MaterialProperty p, Conductivity sigma, TemperatureCoefficient alpha,
+                                          PermeabilityModel mu, RelativePermittivity eps, Density rho,
+                                          MagneticFluxDensity bs) {
+        switch (p) {
+            case CONDUCTIVITY:
+                return sigma == null ? OptionalDouble.empty() : OptionalDouble.of(sigma.toSiemensPerMetre());
+            case TEMPERATURE_COEFFICIENT:
+                return alpha == null ? OptionalDouble.empty() : OptionalDouble.of(alpha.toPerKelvin());
+            case PERMEABILITY:
+                return mu == null ? OptionalDouble.empty() : OptionalDouble.of(mu.staticValue());
+            case PERMITTIVITY:
+                return eps == null ? OptionalDouble.empty() : OptionalDouble.of(eps.value());
+            case DENSITY:
+                return rho == null ? OptionalDouble.empty() : OptionalDouble.of(rho.toKilogramsPerCubicMetre());
+            case SATURATION:
+                return bs == null ? OptionalDouble.empty() : OptionalDouble.of(bs.toTesla());
+            default:
+                return OptionalDouble.empty();
+        }
+    }
+
+    /**
      * Whether the static relative permeability is {@value #FERROMAGNETIC_MU} or more.
      *
      * @return true for ferromagnetic materials
@@ -342,13 +409,13 @@ public final class Material implements MediumSource {
                 && m.density.equals(density) && Objects.equals(m.saturation, saturation)
                 && Objects.equals(m.sheetResistance, sheetResistance)
                 && Objects.equals(m.nominalThickness, nominalThickness) && Objects.equals(m.note, note)
-                && m.sources.equals(sources);
+                && m.sources.equals(sources) && m.ranges.equals(ranges);
     }
 
     @Override
     public int hashCode() {
         return Objects.hash(id, name, conductivity, alpha, permeability, permittivity, density, saturation,
-                sheetResistance, nominalThickness, note, sources);
+                sheetResistance, nominalThickness, note, sources, ranges);
     }
 
     /**
@@ -382,6 +449,7 @@ public final class Material implements MediumSource {
         private Length nominalThickness;
         private String note;
         private final EnumMap<MaterialProperty, String> sources = new EnumMap<>(MaterialProperty.class);
+        private final EnumMap<MaterialProperty, TypicalRange> ranges = new EnumMap<>(MaterialProperty.class);
 
         private Builder(String id, String name) {
             this.id = id;
@@ -389,7 +457,21 @@ public final class Material implements MediumSource {
         }
 
         private void source(MaterialProperty p, String source) {
-            sources.put(p, Require.text(id + " " + p.key() + " source", source, 1000));
+            String what = id + " " + p.key() + " source";
+            sources.put(p, Provenance.requireWellFormed(what, Require.text(what, source, 1000)));
+        }
+
+        /**
+         * Stores the range a published reference gives for a property beside its typical
+         * value; {@link #build()} checks that the range holds the typical value.
+         *
+         * @param range the range, not null, in the property's SI unit
+         * @return this builder
+         */
+        public Builder range(TypicalRange range) {
+            Require.nonNull("range", range);
+            ranges.put(range.property(), range);
+            return this;
         }
 
         /**
@@ -540,6 +622,18 @@ public final class Material implements MediumSource {
                 throw new IllegalArgumentException(id + ": a ferromagnetic material (static µr "
                         + Text.number(permeability.staticValue()) + ") needs a saturation flux density ("
                         + MaterialProperty.SATURATION.key() + ")");
+            }
+            for (TypicalRange r : ranges.values()) {
+                MaterialProperty p = r.property();
+                OptionalDouble v = typical(p, conductivity, alpha, permeability, permittivity, density, saturation);
+                if (v.isEmpty()) {
+                    throw new IllegalArgumentException(id + ": a range of " + p.key() + " needs a " + p.key());
+                }
+                if (!r.contains(v.getAsDouble())) {
+                    throw new IllegalArgumentException(id + ": the " + r + " does not hold the typical value "
+                            + Text.number(v.getAsDouble()) + " " + TypicalRange.unit(p)
+                            + "; allowed: a range from at most to at least the typical value");
+                }
             }
             return new Material(this);
         }

@@ -38,6 +38,8 @@ import tools.jackson.databind.node.ObjectNode;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.materials.MaterialProperty;
+import io.shieldmath.shield.materials.TypicalRange;
+import java.util.function.ToDoubleFunction;
 import io.shieldmath.shield.internal.Require;
 import java.io.IOException;
 import java.io.InputStream;
@@ -65,12 +67,18 @@ import static io.shieldmath.shield.materials.files.JsonValues.*;
 public final class CatalogueFile {
 
     static final String CATALOGUE_FORMAT = "shield-catalogue";
+    /** The newest catalogue version: 2 adds {@code "range"} to property objects. */
+    static final int CATALOGUE_VERSION = 2;
+    /** The version from which property objects may hold a {@code "range"}. */
+    static final int RANGE_VERSION = 2;
     static final int MAX_MATERIALS = 10_000;
 
     private static final Set<String> CATALOGUE_FIELDS = Set.of("format", "version", "materials");
     private static final Set<String> MATERIAL_FIELDS = Set.of("id", "name", "conductivity", "sheetResistance",
             "temperatureCoefficient", "permeability", "permittivity", "density", "saturation", "note");
     private static final Set<String> SHEET_FIELDS = Set.of("value", "thickness", "source");
+    private static final Set<String> RANGED_FIELDS = Set.of("value", "source", "range");
+    private static final Set<String> RANGE_FIELDS = Set.of("low", "high");
 
     private CatalogueFile() {
     }
@@ -122,7 +130,7 @@ public final class CatalogueFile {
      * <pre>
      * {
      *   "format": "shield-catalogue",
-     *   "version": 1,
+     *   "version": 2,
      *   "materials": [
      *     {
      *       "id": "copper-annealed",
@@ -150,6 +158,19 @@ public final class CatalogueFile {
      * density T, mT, G; sheet resistance Ω/sq or mΩ/sq. Unknown fields, missing units,
      * duplicate identifiers and out-of-range values are rejected.
      *
+     * <p>Version 2 adds an optional {@code "range"} beside the value of a conductivity,
+     * temperature coefficient, permeability, permittivity, density or saturation: the range
+     * a published reference gives around the typical value, in the value's own form, for
+     * example {@code "conductivity": {"value": "2.1 MS/m", "range": {"low": "1.9 MS/m",
+     * "high": "2.3 MS/m"}, "source": "..."}}, or plain numbers for permittivity and for
+     * permeability (the static µr: {@code "range": {"low": 20000, "high": 100000}}). The
+     * range must hold the typical value. Version 1 documents are read as before and may
+     * hold no range; a catalogue is written as version 1 when none of its materials has a
+     * range, so that it reads back in older releases, and as version 2 otherwise.
+     * The provenance of each number is read from its source text ({@link
+     * io.shieldmath.shield.materials.Provenance}); a source that starts with "checked
+     * against" must say where it was read.
+     *
      * @param catalogue the catalogue, not null
      * @return the document, pretty-printed
      */
@@ -171,12 +192,12 @@ public final class CatalogueFile {
 
     private static Catalogue readCatalogue(Node root) {
         Node.Fields f = root.object(CATALOGUE_FIELDS);
-        header(f, CATALOGUE_FORMAT);
+        int version = header(f, CATALOGUE_FORMAT, CATALOGUE_VERSION);
         List<Node> entries = f.required("materials").array(0, MAX_MATERIALS);
         List<Material> materials = new ArrayList<>(entries.size());
         Map<String, Node> seen = new HashMap<>();
         for (Node e : entries) {
-            Material m = readMaterial(e);
+            Material m = readMaterial(e, version);
             Node previous = seen.putIfAbsent(m.id(), e);
             if (previous != null) {
                 throw e.fields.get("id").error("duplicate material id \"" + m.id() + "\" (first at line "
@@ -187,14 +208,15 @@ public final class CatalogueFile {
         return Catalogue.of(materials);
     }
 
-    private static Material readMaterial(Node n) {
+    private static Material readMaterial(Node n, int version) {
         Node.Fields f = n.object(MATERIAL_FIELDS);
         Node idNode = f.required("id");
         String id = idNode.convert(Material::checkId, idNode.string());
         Node nameNode = f.required("name");
         Material.Builder b = nameNode.convert(s -> Material.builder(id, s), nameNode.string());
 
-        valued(f, "conductivity", false, Conductivity::parse, "58 MS/m", b::conductivity);
+        valued(f, "conductivity", false, Conductivity::parse, "58 MS/m", b::conductivity, b, version,
+                MaterialProperty.CONDUCTIVITY, Conductivity::toSiemensPerMetre);
         Node sheet = f.optional("sheetResistance");
         if (sheet != null) {
             Node.Fields v = sheet.object(SHEET_FIELDS);
@@ -204,18 +226,24 @@ public final class CatalogueFile {
             at(sheet, () -> b.sheetResistance(rs, t, src));
         }
         valued(f, "temperatureCoefficient", false, TemperatureCoefficient::parse, "0.00393 /K",
-                b::temperatureCoefficient);
+                b::temperatureCoefficient, b, version, MaterialProperty.TEMPERATURE_COEFFICIENT,
+                TemperatureCoefficient::toPerKelvin);
         Node mu = f.required("permeability");
         PermeabilityModel model = readPermeability(mu, true);
-        String muSource = source(new Node.Fields(mu));
+        Node.Fields muFields = new Node.Fields(mu);
+        String muSource = source(muFields);
         at(mu, () -> b.permeability(model, muSource));
+        range(muFields, b, version, MaterialProperty.PERMEABILITY, model.staticValue(), Node::number);
         Node eps = f.required("permittivity");
-        Node.Fields ev = eps.object(VALUE_FIELDS);
+        Node.Fields ev = eps.object(RANGED_FIELDS);
         RelativePermittivity epsilon = permittivity(ev.required("value"));
         String epsSource = source(ev);
         at(eps, () -> b.permittivity(epsilon, epsSource));
-        valued(f, "density", true, Density::parse, "8890 kg/m³", b::density);
-        valued(f, "saturation", false, MagneticFluxDensity::parse, "0.75 T", b::saturation);
+        range(ev, b, version, MaterialProperty.PERMITTIVITY, epsilon.value(), Node::number);
+        valued(f, "density", true, Density::parse, "8890 kg/m³", b::density, b, version, MaterialProperty.DENSITY,
+                Density::toKilogramsPerCubicMetre);
+        valued(f, "saturation", false, MagneticFluxDensity::parse, "0.75 T", b::saturation, b, version,
+                MaterialProperty.SATURATION, MagneticFluxDensity::toTesla);
         Node note = f.optional("note");
         if (note != null) {
             String text = note.string();
@@ -224,23 +252,55 @@ public final class CatalogueFile {
         return at(n, b::build);
     }
 
-    /** Reads a {@code {"value": ..., "source": ...}} property and hands both to a builder step. */
+    /**
+     * Reads a {@code {"value": ..., "source": ..., "range": ...}} property and hands value and
+     * source to a builder step, then the range, if any, read with the same parser.
+     */
     private static <Q> void valued(Node.Fields f, String key, boolean required, Function<String, Q> parse,
-                                   String example, BiFunction<Q, String, Material.Builder> step) {
+                                   String example, BiFunction<Q, String, Material.Builder> step,
+                                   Material.Builder b, int version, MaterialProperty p, ToDoubleFunction<Q> si) {
         Node n = required ? f.required(key) : f.optional(key);
         if (n == null) {
             return;
         }
-        Node.Fields v = n.object(VALUE_FIELDS);
+        Node.Fields v = n.object(RANGED_FIELDS);
         Q q = v.required("value").quantity(parse, example);
         String src = source(v);
         at(n, () -> step.apply(q, src));
+        range(v, b, version, p, si.applyAsDouble(q), e -> si.applyAsDouble(e.quantity(parse, example)));
+    }
+
+    /**
+     * Reads the optional {@code "range": {"low": ..., "high": ...}} of a property object
+     * (catalogue version {@value #RANGE_VERSION} and later) and checks, at the range, that it
+     * holds the typical value.
+     */
+    private static void range(Node.Fields v, Material.Builder b, int version, MaterialProperty p, double typical,
+                              ToDoubleFunction<Node> read) {
+        Node n = v.optional("range");
+        if (n == null) {
+            return;
+        }
+        if (version < RANGE_VERSION) {
+            throw n.error("a range needs version " + RANGE_VERSION + " of the catalogue format; this document "
+                    + "says version " + version);
+        }
+        Node.Fields r = n.object(RANGE_FIELDS);
+        double low = read.applyAsDouble(r.required("low"));
+        double high = read.applyAsDouble(r.required("high"));
+        TypicalRange range = at(n, () -> TypicalRange.of(p, low, high));
+        if (!range.contains(typical)) {
+            throw n.error("the " + range + " does not hold the typical value " + Text.number(typical) + " "
+                    + TypicalRange.unit(p) + "; allowed: a range from at most to at least the typical value");
+        }
+        b.range(range);
     }
 
     private static String writeCatalogue(Catalogue c) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", CATALOGUE_FORMAT);
-        root.put("version", VERSION);
+        boolean ranged = c.all().stream().anyMatch(m -> !m.ranges().isEmpty());
+        root.put("version", ranged ? RANGE_VERSION : VERSION);
         ArrayNode list = root.putArray("materials");
         for (Material m : c.all()) {
             writeMaterial(list.addObject(), m);
@@ -266,9 +326,11 @@ public final class CatalogueFile {
         ObjectNode mu = o.putObject("permeability");
         writePermeability(mu, m.permeability());
         mu.put("source", m.source(MaterialProperty.PERMEABILITY).get());
+        writeRange(mu, m, MaterialProperty.PERMEABILITY);
         ObjectNode eps = o.putObject("permittivity");
         number(eps, "value", m.permittivity().value());
         eps.put("source", m.source(MaterialProperty.PERMITTIVITY).get());
+        writeRange(eps, m, MaterialProperty.PERMITTIVITY);
         valued(o, "density", text(m.density()), m, MaterialProperty.DENSITY);
         if (m.saturation().isPresent()) {
             valued(o, "saturation", text(m.saturation().get()), m, MaterialProperty.SATURATION);
@@ -280,5 +342,35 @@ public final class CatalogueFile {
         ObjectNode v = o.putObject(key);
         v.put("value", value);
         v.put("source", m.source(p).get());
+        writeRange(v, m, p);
+    }
+
+    private static void writeRange(ObjectNode o, Material m, MaterialProperty p) {
+        TypicalRange r = m.range(p).orElse(null);
+        if (r == null) {
+            return;
+        }
+        ObjectNode n = o.putObject("range");
+        switch (p) {
+            case CONDUCTIVITY:
+                n.put("low", text(Conductivity.ofSiemensPerMetre(r.low())));
+                n.put("high", text(Conductivity.ofSiemensPerMetre(r.high())));
+                break;
+            case TEMPERATURE_COEFFICIENT:
+                n.put("low", text(TemperatureCoefficient.ofPerKelvin(r.low())));
+                n.put("high", text(TemperatureCoefficient.ofPerKelvin(r.high())));
+                break;
+            case DENSITY:
+                n.put("low", text(Density.ofKilogramsPerCubicMetre(r.low())));
+                n.put("high", text(Density.ofKilogramsPerCubicMetre(r.high())));
+                break;
+            case SATURATION:
+                n.put("low", text(MagneticFluxDensity.ofTesla(r.low())));
+                n.put("high", text(MagneticFluxDensity.ofTesla(r.high())));
+                break;
+            default:
+                number(n, "low", r.low());
+                number(n, "high", r.high());
+        }
     }
 }

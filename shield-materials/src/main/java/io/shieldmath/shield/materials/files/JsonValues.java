@@ -66,11 +66,16 @@ final class JsonValues {
     }
 
     static void header(Node.Fields f, String format) {
+        header(f, format, VERSION);
+    }
+
+    /** Checks the format name and reads the version, from {@value #VERSION} to {@code newest}. */
+    static int header(Node.Fields f, String format, int newest) {
         Node fmt = f.required("format");
         if (!fmt.string().equals(format)) {
             throw fmt.error("expected \"" + format + "\", found \"" + fmt.text + "\"");
         }
-        f.required("version").integer(VERSION, VERSION);
+        return f.required("version").integer(VERSION, newest);
     }
 
     static String source(Node.Fields v) {
@@ -98,12 +103,12 @@ final class JsonValues {
     }
 
     static PermeabilityModel readPermeability(Node n, boolean withSource) {
-        Node.Fields probe = n.object(Set.of("model", "value", "lowFrequency", "corner", "points", "source"));
+        Node.Fields probe = n.object(Set.of("model", "value", "lowFrequency", "corner", "points", "source", "range"));
         Node kind = probe.required("model");
         String model = kind.string();
         switch (model) {
             case "constant": {
-                n.object(withSource ? Set.of("model", "value", "source") : Set.of("model", "value"));
+                n.object(withSource ? Set.of("model", "value", "source", "range") : Set.of("model", "value"));
                 Node v = probe.required("value");
                 if (v.type == Node.Type.NUMBER) {
                     double x = v.number();
@@ -112,7 +117,7 @@ final class JsonValues {
                 return v.convert(s -> PermeabilityModel.constant(RelativePermeability.parse(s)), v.string());
             }
             case "relaxation": {
-                n.object(withSource ? Set.of("model", "lowFrequency", "corner", "source")
+                n.object(withSource ? Set.of("model", "lowFrequency", "corner", "source", "range")
                         : Set.of("model", "lowFrequency", "corner"));
                 Node low = probe.required("lowFrequency");
                 double mu = low.number();
@@ -120,7 +125,7 @@ final class JsonValues {
                 return low.convert(s -> PermeabilityModel.relaxation(mu, fc), low.text);
             }
             case "table": {
-                n.object(withSource ? Set.of("model", "points", "source") : Set.of("model", "points"));
+                n.object(withSource ? Set.of("model", "points", "source", "range") : Set.of("model", "points"));
                 Node pts = probe.required("points");
                 List<Node> list = pts.array(1, MAX_TABLE_POINTS);
                 double[] hz = new double[list.size()];
