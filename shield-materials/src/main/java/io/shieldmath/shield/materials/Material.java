@@ -627,7 +627,9 @@ public final class Material implements MediumSource {
                 MaterialProperty p = r.property();
                 OptionalDouble v = typical(p, conductivity, alpha, permeability, permittivity, density, saturation);
                 if (v.isEmpty()) {
-                    throw new IllegalArgumentException(id + ": a range of " + p.key() + " needs a " + p.key());
+                    throw new IllegalArgumentException(id + ": a range of " + p.key() + " needs a " + p.key()
+                            + (p == MaterialProperty.CONDUCTIVITY ? " (a finish known by sheet resistance takes no "
+                            + "conductivity range)" : ""));
                 }
                 if (!r.contains(v.getAsDouble())) {
                     throw new IllegalArgumentException(id + ": the " + r + " does not hold the typical value "

@@ -21,11 +21,13 @@ public final class TypicalRange {
     private final MaterialProperty property;
     private final double low;
     private final double high;
+    private final String source;
 
-    private TypicalRange(MaterialProperty property, double low, double high) {
+    private TypicalRange(MaterialProperty property, double low, double high, String source) {
         this.property = property;
         this.low = low;
         this.high = high;
+        this.source = source;
     }
 
     /**
@@ -36,11 +38,15 @@ public final class TypicalRange {
      *                 material accepts for the property (σ 0 to 1e9 S/m, α −0.01 to 0.01 /K,
      *                 µr 0 to 1e7, εr 1 to 1e6, density 0.01 to 30 000 kg/m³, Bs 0.01 to 3 T)
      * @param high     the upper bound, in the same unit and limits, above {@code low}
+     * @param source   where the range comes from, not blank, at most 1000 characters, in the
+     *                 forms {@link Provenance} reads (a text that starts with "checked
+     *                 against" must name the source and where it was read)
      * @return the range
-     * @throws IllegalArgumentException if the property takes no range or the bounds are out
-     *                                  of those limits or not increasing
+     * @throws IllegalArgumentException if the property takes no range, the bounds are out
+     *                                  of those limits or not increasing, or the source is
+     *                                  not acceptable
      */
-    public static TypicalRange of(MaterialProperty property, double low, double high) {
+    public static TypicalRange of(MaterialProperty property, double low, double high, String source) {
         String unit = unit(Require.nonNull("property", property));
         double[] allowed = allowed(property);
         Require.inRange(property.key() + " range low end", low, allowed[0], allowed[1], unit);
@@ -49,7 +55,9 @@ public final class TypicalRange {
             throw new IllegalArgumentException(property.key() + " range " + Text.number(low) + " to "
                     + Text.number(high) + " " + unit + " is not acceptable; allowed: a low end below the high end");
         }
-        return new TypicalRange(property, low, high);
+        String what = property.key() + " range source";
+        String text = Provenance.requireWellFormed(what, Require.text(what, source, 1000));
+        return new TypicalRange(property, low, high, text);
     }
 
     /** The values a material accepts for the property (see {@link Material}), in its SI unit. */
@@ -125,6 +133,24 @@ public final class TypicalRange {
     }
 
     /**
+     * Where the range comes from.
+     *
+     * @return the source text
+     */
+    public String source() {
+        return source;
+    }
+
+    /**
+     * How far the range can be trusted, as its source states it.
+     *
+     * @return {@link Provenance#of(String)} of the source
+     */
+    public Provenance provenance() {
+        return Provenance.of(source);
+    }
+
+    /**
      * Whether a value lies in the range, bounds included.
      *
      * @param value in the property's SI unit
@@ -137,16 +163,17 @@ public final class TypicalRange {
     @Override
     public boolean equals(Object o) {
         return o instanceof TypicalRange r && r.property == property && Double.compare(r.low, low) == 0
-                && Double.compare(r.high, high) == 0;
+                && Double.compare(r.high, high) == 0 && r.source.equals(source);
     }
 
     @Override
     public int hashCode() {
-        return (property.hashCode() * 31 + Double.hashCode(low)) * 31 + Double.hashCode(high);
+        return ((property.hashCode() * 31 + Double.hashCode(low)) * 31 + Double.hashCode(high)) * 31
+                + source.hashCode();
     }
 
     /**
-     * A description such as {@code "permeability 20000 to 100000 (relative)"}.
+     * A description such as {@code "permeability 20000 to 100000 (relative)"}, without the source.
      *
      * @return the description
      */

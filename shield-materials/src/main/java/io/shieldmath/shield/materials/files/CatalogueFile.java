@@ -78,7 +78,7 @@ public final class CatalogueFile {
             "temperatureCoefficient", "permeability", "permittivity", "density", "saturation", "note");
     private static final Set<String> SHEET_FIELDS = Set.of("value", "thickness", "source");
     private static final Set<String> RANGED_FIELDS = Set.of("value", "source", "range");
-    private static final Set<String> RANGE_FIELDS = Set.of("low", "high");
+    private static final Set<String> RANGE_FIELDS = Set.of("low", "high", "source");
 
     private CatalogueFile() {
     }
@@ -162,9 +162,10 @@ public final class CatalogueFile {
      * temperature coefficient, permeability, permittivity, density or saturation: the range
      * a published reference gives around the typical value, in the value's own form, for
      * example {@code "conductivity": {"value": "2.1 MS/m", "range": {"low": "1.9 MS/m",
-     * "high": "2.3 MS/m"}, "source": "..."}}, or plain numbers for permittivity and for
-     * permeability (the static µr: {@code "range": {"low": 20000, "high": 100000}}). The
-     * range must hold the typical value. Version 1 documents are read as before and may
+     * "high": "2.3 MS/m", "source": "..."}, "source": "..."}}, or plain numbers for
+     * permittivity and for permeability (the static µr: {@code "range": {"low": 20000,
+     * "high": 100000, "source": "..."}}). A range has its own source and must hold the
+     * typical value. Version 1 documents are read as before and may
      * hold no range; a catalogue is written as version 1 when none of its materials has a
      * range, so that it reads back in older releases, and as version 2 otherwise.
      * The provenance of each number is read from its source text ({@link
@@ -288,7 +289,8 @@ public final class CatalogueFile {
         Node.Fields r = n.object(RANGE_FIELDS);
         double low = read.applyAsDouble(r.required("low"));
         double high = read.applyAsDouble(r.required("high"));
-        TypicalRange range = at(n, () -> TypicalRange.of(p, low, high));
+        String src = source(r);
+        TypicalRange range = at(n, () -> TypicalRange.of(p, low, high, src));
         if (!range.contains(typical)) {
             throw n.error("the " + range + " does not hold the typical value " + Text.number(typical) + " "
                     + TypicalRange.unit(p) + "; allowed: a range from at most to at least the typical value");
@@ -372,5 +374,6 @@ public final class CatalogueFile {
                 number(n, "low", r.low());
                 number(n, "high", r.high());
         }
+        n.put("source", r.source());
     }
 }

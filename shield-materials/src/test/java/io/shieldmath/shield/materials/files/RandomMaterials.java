@@ -6,6 +6,7 @@ package io.shieldmath.shield.materials.files;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.materials.MaterialProperty;
+import io.shieldmath.shield.materials.TypicalRange;
 
 import io.shieldmath.shield.quantity.Temperature;
 import io.shieldmath.shield.quantity.TemperatureCoefficient;
@@ -122,7 +123,56 @@ final class RandomMaterials {
         if (r.nextBoolean()) {
             b.note(text(r));
         }
-        return b.build();
+        Material m = b.build();
+        if (r.nextInt(3) == 0) {
+            // Ranges around the typical values of some properties this material carries (version 2 files).
+            for (MaterialProperty p : RANGED) {
+                if (r.nextBoolean() || m.typicalValue(p).isEmpty()
+                        || (p == MaterialProperty.CONDUCTIVITY && m.sheetResistance().isPresent())) {
+                    continue;
+                }
+                TypicalRange range = rangeAround(r, p, m.typicalValue(p).getAsDouble());
+                if (range != null) {
+                    b.range(range);
+                }
+            }
+            m = b.build();
+        }
+        return m;
+    }
+
+    private static final MaterialProperty[] RANGED = {MaterialProperty.CONDUCTIVITY,
+        MaterialProperty.TEMPERATURE_COEFFICIENT, MaterialProperty.PERMEABILITY, MaterialProperty.PERMITTIVITY,
+        MaterialProperty.DENSITY, MaterialProperty.SATURATION};
+
+    /** The limits a material accepts, as in {@link Material}. */
+    private static double[] limits(MaterialProperty p) {
+        switch (p) {
+            case CONDUCTIVITY:
+                return new double[] {0, 1e9};
+            case TEMPERATURE_COEFFICIENT:
+                return new double[] {-0.01, 0.01};
+            case PERMEABILITY:
+                return new double[] {0, 1e7};
+            case PERMITTIVITY:
+                return new double[] {1, 1e6};
+            case DENSITY:
+                return new double[] {0.01, 30_000};
+            default:
+                return new double[] {0.01, 3};
+        }
+    }
+
+    /** A range that holds the typical value, within the limits, or null if none fits. */
+    static TypicalRange rangeAround(Random r, MaterialProperty p, double typical) {
+        double[] lim = limits(p);
+        double w = Math.max(Math.abs(typical), 1e-6);
+        double low = Math.max(lim[0], r.nextInt(4) == 0 ? typical : typical - w * r.nextDouble());
+        double high = Math.min(lim[1], r.nextInt(4) == 0 ? typical : typical + w * r.nextDouble());
+        if (!(low < high)) {
+            return null;
+        }
+        return TypicalRange.of(p, low, high, text(r));
     }
 
     static Catalogue catalogue(Random r, int maxMaterials) {
