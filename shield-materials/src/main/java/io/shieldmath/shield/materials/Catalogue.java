@@ -34,8 +34,13 @@ import java.util.function.Predicate;
  * }</pre>
  *
  * <p>The built-in catalogue is the JSON resource {@code catalogue.json} in this package,
- * in the format of {@link CatalogueFile}; every number in it carries its source or the words
- * "from memory" with the source to check it against. The values are typical, not
+ * in the format of {@link CatalogueFile}; every number in it either was checked against a
+ * named published source, with the address where it was read, or says "from memory" (with
+ * the source to check it against and why it was not) or "common practice"; its
+ * {@link Provenance} tells which, and {@link #withProvenance(MaterialProperty, Provenance)}
+ * filters on it. Where a reference gives a range, or references disagree by more than about
+ * 3 %, the entry stores the range ({@link Material#range(MaterialProperty)}) and keeps the
+ * lower conductivity, the cautious choice for shielding. The values are typical, not
  * guaranteed; verify designs by measurement.
  *
  * <p>Immutable and thread-safe; equality is by value (materials and their order).

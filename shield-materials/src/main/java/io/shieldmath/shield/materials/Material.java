@@ -247,8 +247,10 @@ public final class Material implements MediumSource {
     }
 
     /**
-     * Where a number comes from: a published source (handbook, standard, datasheet class)
-     * or "from memory" with the source it should be checked against.
+     * Where a number comes from: "checked against" a named published source with where it
+     * was read, "from memory" with the source it should be checked against, "common practice",
+     * "measured", "derived", or a cited source; {@link #provenance(MaterialProperty)} reads
+     * which.
      *
      * @param property the property, not null
      * @return the source, or empty if this material does not carry that property

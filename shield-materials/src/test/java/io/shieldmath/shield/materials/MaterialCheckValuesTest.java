@@ -58,25 +58,45 @@ class MaterialCheckValuesTest {
     }
 
     /**
-     * Conductivities in % IACS, typical values from memory, to be checked against ASM Handbook Vol. 2
-     * (and Vol. 1 for steels). These restate the handbook figures independently of the resource, so a
-     * typing error in either shows up; tolerance 2 % IACS-relative.
+     * Conductivities in % IACS against the published figures the catalogue was checked against (each
+     * source is named in the catalogue entry with the address where it was read), restated here
+     * independently of the resource so that a typing error in either shows up; tolerance 3 %
+     * IACS-relative (the catalogue keeps a value within 3 % of its sources, as beryllium copper's 22 %
+     * IACS against 22.4). % IACS = 172.41 / ρ in µΩ·cm. Copper hard-drawn stays from memory (ASTM B1, not
+     * checked).
      */
     @Test
     void conductivitiesInPercentIacs() {
         Object[][] table = {
-            {"copper-hard-drawn", 97.0}, {"copper-etp-c11000", 101.0}, {"aluminium-1100-o", 59.0},
-            {"aluminium-3003-h14", 41.0}, {"aluminium-5052-h32", 35.0}, {"aluminium-6061-t6", 43.0},
-            {"brass-c26000", 28.0}, {"brass-c36000", 26.0}, {"bronze-phosphor-c51000", 15.0},
-            {"beryllium-copper-c17200", 22.0}, {"magnesium", 38.6}, {"magnesium-az31b", 18.5}, {"zinc", 28.0},
-            {"tin", 15.0}, {"silver", 108.0}, {"titanium-grade-2", 3.1}, {"lead", 8.3},
-            // 304: 72 µΩ·cm → 2.39 % IACS; 1010: 14.2 µΩ·cm → 12.1 % IACS (ASM Handbook Vol. 1, from memory).
-            {"stainless-304", 172.41 / 72}, {"steel-1010", 172.41 / 14.2},
+            {"copper-hard-drawn", 97.0},                       // from memory, ASTM B1
+            {"copper-etp-c11000", 172.41 / 1.71},              // CDA data sheet C11000: 1.71 µΩ·cm
+            {"aluminium-1100-o", 59.0},                        // BTI Metals, AA table: 59 % IACS
+            {"aluminium-3003-h14", 172.41 / 4.16},             // MatWeb (Aluminum Association): 4.16 µΩ·cm
+            {"aluminium-5052-h32", 172.41 / 4.99},             // ASM/MatWeb (Aluminum Association): 4.99 µΩ·cm
+            {"aluminium-6061-t6", 172.41 / 3.99},              // Aluminum Association typical: 3.99 µΩ·cm
+            {"brass-c26000", 28.0},                            // CDA design guide: 28 % IACS
+            {"brass-c36000", 26.0},                            // Diversified Bronze, MakeItFrom: 26 % IACS
+            {"bronze-phosphor-c51000", 15.0},                  // CDA 510 data sheet: 15 % IACS (MakeItFrom 18)
+            {"bronze-silicon-c65500", 7.0},                    // Atlas Metal, MakeItFrom: 7.0 % IACS
+            {"beryllium-copper-c17200", 172.41 / 7.68},        // Little Falls Alloys: 7.68 µΩ·cm
+            {"magnesium", 38.6},                               // ASM International: 38.6 % IACS
+            {"magnesium-az31b", 172.41 / 9.2},                 // SubsTech: 9.2 µΩ·cm
+            {"zinc", 172.41 / 5.945},                          // Robotz wiki table: 5.945 µΩ·cm
+            {"tin", 172.41 / 11.5},                            // Robotz wiki table: 11.5 µΩ·cm (Preproom 10.9)
+            {"nickel", 172.41 / 6.99},                         // Preproom table: 6.99 µΩ·cm
+            {"silver", 172.41 / 1.59},                         // Preproom table: 1.59 µΩ·cm
+            {"gold", 172.41 / 2.44},                           // Preproom table: 2.44 µΩ·cm (ToolBox 2.24)
+            {"titanium-grade-2", 172.41 / 52},                 // ASM/MatWeb Grade 2 annealed: 52 µΩ·cm
+            {"lead", 172.41 / 22},                             // Preproom table: 22 µΩ·cm (others 20.5, 20.6)
+            {"stainless-304", 172.41 / 72},                    // AISI 304 data sheet: 72 µΩ·cm
+            {"stainless-316", 172.41 / 74},                    // ASM/MatWeb 316 annealed: 74 µΩ·cm
+            {"stainless-430", 172.41 / 60},                    // 430 tables: 600 nΩ·m
+            {"steel-1010", 172.41 / 14.3},                     // SAE 1010 data sheet: 14.3 µΩ·cm
         };
         for (Object[] row : table) {
             Material m = cat.get((String) row[0]);
             double expected = (Double) row[1];
-            assertEquals(expected, m.conductivity().toPercentIacs(), expected * 0.02, m.id());
+            assertEquals(expected, m.conductivity().toPercentIacs(), expected * 0.03, m.id());
         }
     }
 
@@ -108,7 +128,7 @@ class MaterialCheckValuesTest {
         assertEquals(20 * Math.log10(1 + 376.730313668 / (2 * rs)), se, 0.01);
     }
 
-    /** Areal mass ρ·t: 1 mm of aluminium 6061 is 2.70 kg/m² (2700 kg/m³, ASM Vol. 2, from memory). */
+    /** Areal mass ρ·t: 1 mm of aluminium 6061 is 2.70 kg/m² (2.70 g/cm³, Aluminum Association typical value). */
     @Test
     void arealMass() {
         assertEquals(2.70, cat.get("aluminium-6061-t6").arealMass(Length.ofMillimetres(1)).toKilogramsPerSquareMetre(), 1e-12);

@@ -6,6 +6,8 @@ package io.shieldmath.shield.materials.files;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.materials.MaterialProperty;
+import io.shieldmath.shield.materials.Provenance;
+import io.shieldmath.shield.materials.TypicalRange;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -181,5 +183,59 @@ class MaterialFileTest {
         assertThrows(IllegalArgumentException.class, () -> Design.of(List.of(), IncidentField.planeWave(),
                 FrequencyBand.parse("1 kHz to 1 MHz"), 10));
         assertThrows(IllegalArgumentException.class, () -> DesignLayer.of(cat.get("lead")));
+    }
+
+    private static final String RANGED = FOIL.replace("\"version\": 1", "\"version\": 2").replace(
+            "{\"value\": \"35 MS/m\", \"source\": \"invented for this test\"}",
+            "{\"value\": \"35 MS/m\", \"range\": {\"low\": \"30 MS/m\", \"high\": \"37 MS/m\", \"source\": "
+                    + "\"invented range\"}, \"source\": \"invented for this test\"}");
+
+    @Test
+    void rangesAreReadAndWrittenInVersionTwo() {
+        Catalogue c = CatalogueFile.parse(RANGED);
+        TypicalRange r = c.get("our-foil").range(MaterialProperty.CONDUCTIVITY).orElseThrow();
+        assertEquals(30e6, r.low(), 0);
+        assertEquals(37e6, r.high(), 0);
+        assertEquals("invented range", r.source());
+        String json = CatalogueFile.toJson(c);
+        assertTrue(json.contains("\"version\" : 2"), json);
+        assertEquals(c, CatalogueFile.parse(json));
+        // Without ranges a catalogue is still written as version 1, readable by older releases.
+        assertTrue(CatalogueFile.toJson(CatalogueFile.parse(FOIL)).contains("\"version\" : 1"));
+        // The built-in catalogue has ranges and reads back equal through version 2.
+        assertTrue(CatalogueFile.toJson(Catalogue.builtIn()).contains("\"version\" : 2"));
+    }
+
+    @Test
+    void badRangesAreRefusedWithTheirLocation() {
+        MaterialFileException v1 = refused(RANGED.replace("\"version\": 2", "\"version\": 1"));
+        assertEquals("$.materials[0].conductivity.range", v1.path());
+        assertEquals(8, v1.line());
+        assertTrue(v1.problem().contains("version 2"), v1.getMessage());
+        MaterialFileException v3 = refused(RANGED.replace("\"version\": 2", "\"version\": 3"));
+        assertEquals("$.version", v3.path());
+        MaterialFileException outside = refused(RANGED.replace("\"30 MS/m\"", "\"36 MS/m\""));
+        assertEquals("$.materials[0].conductivity.range", outside.path());
+        assertTrue(outside.problem().contains("does not hold the typical value"), outside.getMessage());
+        MaterialFileException noSource = refused(RANGED.replace(", \"source\": \"invented range\"", ""));
+        assertTrue(noSource.problem().contains("missing field \"source\""), noSource.getMessage());
+        MaterialFileException unknown = refused(RANGED.replace("\"high\": \"37 MS/m\"", "\"top\": \"37 MS/m\""));
+        assertEquals("$.materials[0].conductivity.range.top", unknown.path());
+        MaterialFileException unit = refused(RANGED.replace("\"37 MS/m\"", "\"37\""));
+        assertEquals("$.materials[0].conductivity.range.high", unit.path());
+        MaterialFileException order = refused(RANGED.replace("\"37 MS/m\"", "\"29 MS/m\""));
+        assertEquals("$.materials[0].conductivity.range", order.path());
+    }
+
+    @Test
+    void aCheckedSourceWithoutItsPlaceIsRefusedWithItsLocation() {
+        MaterialFileException e = refused(FOIL.replace("{\"value\": \"2700 kg/m3\", \"source\": \"invented for this test\"}",
+                "{\"value\": \"2700 kg/m3\", \"source\": \"checked against a handbook\"}"));
+        assertEquals("$.materials[0].density", e.path());
+        assertEquals(12, e.line());
+        assertTrue(e.problem().contains("read at"), e.getMessage());
+        Material ok = CatalogueFile.parse(FOIL.replace("\"source\": \"invented for this test\"}\n    }",
+                "\"source\": \"checked against a handbook, read at https://example.org/table\"}\n    }")).get("our-foil");
+        assertEquals(Provenance.CHECKED, ok.provenance(MaterialProperty.DENSITY).orElseThrow());
     }
 }
