@@ -6,6 +6,8 @@ package io.shieldmath.shield.examples;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.materials.MaterialProperty;
+import io.shieldmath.shield.materials.Provenance;
+import io.shieldmath.shield.materials.TypicalRange;
 
 import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.medium.PermeabilityModel;
@@ -24,7 +26,10 @@ import java.util.Map;
 
 /**
  * Prints a catalogue as a Markdown table with numbered sources, the table of the README,
- * generated from the catalogue resource so that it cannot drift from it.
+ * generated from the catalogue resource so that it cannot drift from it. Each number is
+ * followed by its source number and its {@link Provenance} (checked, from memory, common
+ * practice, ...), a stored range by its own; a second table counts the provenance of the
+ * numbers by property.
  *
  * <pre>
  * ./mvnw -q -pl shield-examples exec:java -Dexamples.main=io.shieldmath.shield.examples.CatalogueTable                              (print)
@@ -119,20 +124,26 @@ public final class CatalogueTable {
                 double sigma = m.conductivity().toSiemensPerMetre();
                 String text = sigma == 0 ? "0" : digits(sigma / 1e6, 4) + " MS/m (" + digits(
                         m.conductivity().toPercentIacs(), 4) + " % IACS)";
-                cells.add(text + ref(sources, m, MaterialProperty.CONDUCTIVITY));
+                cells.add(text + ref(sources, m, MaterialProperty.CONDUCTIVITY)
+                        + range(sources, m, MaterialProperty.CONDUCTIVITY, 1e6, " MS/m"));
             }
             cells.add(m.temperatureCoefficient().isPresent()
                     ? digits(m.temperatureCoefficient().get().toPerKelvin(), 4)
-                    + ref(sources, m, MaterialProperty.TEMPERATURE_COEFFICIENT) : "—");
-            cells.add(model(m.permeability()) + ref(sources, m, MaterialProperty.PERMEABILITY));
+                    + ref(sources, m, MaterialProperty.TEMPERATURE_COEFFICIENT)
+                    + range(sources, m, MaterialProperty.TEMPERATURE_COEFFICIENT, 1, "") : "—");
+            cells.add(model(m.permeability()) + ref(sources, m, MaterialProperty.PERMEABILITY)
+                    + range(sources, m, MaterialProperty.PERMEABILITY, 1, " (static µr)"));
             PermeabilityModel p = m.permeability();
             cells.add(magnitude(p, 10) + " / " + magnitude(p, 1e4) + " / " + magnitude(p, 1e5));
-            cells.add(digits(m.permittivity().value(), 4) + ref(sources, m, MaterialProperty.PERMITTIVITY));
-            cells.add(digits(m.density().toKilogramsPerCubicMetre(), 4) + ref(sources, m, MaterialProperty.DENSITY));
+            cells.add(digits(m.permittivity().value(), 4) + ref(sources, m, MaterialProperty.PERMITTIVITY)
+                    + range(sources, m, MaterialProperty.PERMITTIVITY, 1, ""));
+            cells.add(digits(m.density().toKilogramsPerCubicMetre(), 4) + ref(sources, m, MaterialProperty.DENSITY)
+                    + range(sources, m, MaterialProperty.DENSITY, 1, ""));
             cells.add(m.saturation().isPresent() ? m.saturation().get() + ref(sources, m, MaterialProperty.SATURATION)
-                    : "—");
+                    + range(sources, m, MaterialProperty.SATURATION, 1, " T") : "—");
             s.append("| ").append(String.join(" | ", cells)).append(" |\n");
         }
+        s.append("\n").append(counts(catalogue));
         s.append("\nSources:\n\n");
         for (Map.Entry<String, Integer> e : sources.entrySet()) {
             s.append(e.getValue()).append(". ").append(e.getKey()).append('\n');
@@ -141,9 +152,65 @@ public final class CatalogueTable {
     }
 
     private static String ref(Map<String, Integer> sources, Material m, MaterialProperty p) {
-        String text = m.source(p).orElseThrow();
+        return ref(sources, m.source(p).orElseThrow());
+    }
+
+    private static String ref(Map<String, Integer> sources, String text) {
         Integer n = sources.computeIfAbsent(text, k -> sources.size() + 1);
-        return " [" + n + "]";
+        return " [" + n + ", " + Provenance.of(text).words() + "]";
+    }
+
+    /** The stored range of a property, in the cell's unit, with its own source; empty if none. */
+    private static String range(Map<String, Integer> sources, Material m, MaterialProperty p, double unit,
+                                String suffix) {
+        TypicalRange r = m.range(p).orElse(null);
+        if (r == null) {
+            return "";
+        }
+        return " (range " + digits(r.low() / unit, 4) + " to " + digits(r.high() / unit, 4) + suffix
+                + ref(sources, r.source()) + ")";
+    }
+
+    /**
+     * How many numbers of each property have each provenance, and how many ranges are stored.
+     *
+     * @param catalogue the catalogue, not null
+     * @return a Markdown table ending with a line break
+     */
+    public static String counts(Catalogue catalogue) {
+        java.util.Objects.requireNonNull(catalogue, "catalogue");
+        StringBuilder s = new StringBuilder("| property |");
+        StringBuilder rule = new StringBuilder("|---|");
+        for (Provenance v : Provenance.values()) {
+            s.append(' ').append(v.words()).append(" |");
+            rule.append("---|");
+        }
+        s.append(" ranges stored |\n").append(rule).append("---|\n");
+        int[] total = new int[Provenance.values().length];
+        int ranges = 0;
+        for (MaterialProperty p : MaterialProperty.values()) {
+            int[] n = new int[total.length];
+            int r = 0;
+            for (Material m : catalogue.all()) {
+                m.provenance(p).ifPresent(v -> n[v.ordinal()]++);
+                r += m.range(p).isPresent() ? 1 : 0;
+            }
+            if (java.util.Arrays.stream(n).sum() == 0) {
+                continue;
+            }
+            s.append("| ").append(p.key()).append(" |");
+            for (int i = 0; i < n.length; i++) {
+                s.append(' ').append(n[i]).append(" |");
+                total[i] += n[i];
+            }
+            s.append(' ').append(r).append(" |\n");
+            ranges += r;
+        }
+        s.append("| all |");
+        for (int t : total) {
+            s.append(' ').append(t).append(" |");
+        }
+        return s.append(' ').append(ranges).append(" |\n").toString();
     }
 
     private static String model(PermeabilityModel p) {

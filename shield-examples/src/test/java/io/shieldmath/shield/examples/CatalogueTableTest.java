@@ -26,6 +26,28 @@ class CatalogueTableTest {
         assertEquals(expected, CatalogueTable.section(text),
                 "README table differs from the catalogue; regenerate it with CatalogueTable (see its javadoc)");
         assertTrue(expected.contains("`nickel-iron-80`") && expected.contains("IEC 60028"));
+        assertTrue(expected.contains(", checked]") && expected.contains(", from memory]")
+                && expected.contains(", common practice]"), "the table shows the provenance of each number");
+    }
+
+    /** The count row adds up to the number of sources the catalogue's materials carry, state by state. */
+    @Test
+    void provenanceCountsAddUp() {
+        Catalogue cat = Catalogue.builtIn();
+        String counts = CatalogueTable.counts(cat);
+        String all = counts.lines().filter(l -> l.startsWith("| all |")).findFirst().orElseThrow();
+        String[] cells = all.split("\\|");
+        long numbers = cat.all().stream().mapToLong(m -> m.sources().size()).sum();
+        long sum = 0;
+        for (int i = 2; i < 2 + io.shieldmath.shield.materials.Provenance.values().length; i++) {
+            sum += Long.parseLong(cells[i].strip());
+        }
+        assertEquals(numbers, sum, counts);
+        long checked = cat.all().stream().flatMap(m -> m.sources().values().stream())
+                .filter(t -> t.startsWith("checked against") && !t.contains("from memory")).count();
+        assertEquals(checked, Long.parseLong(cells[2].strip()), counts);
+        long ranges = cat.all().stream().mapToLong(m -> m.ranges().size()).sum();
+        assertEquals(ranges, Long.parseLong(cells[cells.length - 1].strip()), counts);
     }
 
     @Test
