@@ -67,6 +67,7 @@ public final class VoltageReading {
      *
      * @param measure the measure, not null
      * @return the value in V
+     * @throws NullPointerException if the measure is null
      */
     public double volts(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(peak);
@@ -77,6 +78,7 @@ public final class VoltageReading {
      *
      * @param measure the measure, not null
      * @return the ± bound in V
+     * @throws NullPointerException if the measure is null
      */
     public double uncertaintyVolts(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(uncertaintyPeak);

@@ -84,6 +84,7 @@ public final class Coil {
      *
      * @param newTurns the number of turns, 1 to 1 000 000
      * @return the new coil; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the number of turns is out of range
      */
     public Coil withTurns(int newTurns) {
         Require.inRange("turns", newTurns, 1, 1_000_000, "turns");

@@ -61,6 +61,7 @@ public final class DriveCurrent {
      *
      * @param measure the measure, not null
      * @return the amplitude in A
+     * @throws NullPointerException if the measure is null
      */
     public double amperes(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(peak);

@@ -39,6 +39,7 @@ public final class SineVoltage {
      *
      * @param measure the measure, not null
      * @return the amplitude in V
+     * @throws NullPointerException if the measure is null
      */
     public double volts(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(peak);

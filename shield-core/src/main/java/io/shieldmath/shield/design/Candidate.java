@@ -54,6 +54,7 @@ public final class Candidate {
      *
      * @param price the price per kg, finite and 0 or more
      * @return the new candidate
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the price is negative or not finite
      */
     public Candidate withCostPerKilogram(double price) {
         return new Candidate(name, medium, density,
@@ -65,6 +66,7 @@ public final class Candidate {
      *
      * @param price the price per m², finite and 0 or more
      * @return the new candidate
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the price is negative or not finite
      */
     public Candidate withCostPerSquareMetre(double price) {
         return new Candidate(name, medium, density, costPerKilogram,
