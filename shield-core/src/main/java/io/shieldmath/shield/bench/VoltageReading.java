@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.bench;
 
+import io.shieldmath.shield.quantity.VoltageAmplitude;
 import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
@@ -46,6 +47,21 @@ public final class VoltageReading {
         Require.positive("voltage reading", volts, unit);
         Require.nonNegative("reading uncertainty", uncertaintyVolts, unit);
         return new VoltageReading(measure.toPeak(volts), measure.toPeak(uncertaintyVolts));
+    }
+
+    /**
+     * A reading with an absolute uncertainty, from typed amplitudes.
+     *
+     * @param reading     the reading, greater than 0, not null
+     * @param uncertainty the ± bound in the same measure, not null
+     * @param measure     how the reading is stated, not null
+     * @return the reading
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the reading is 0
+     */
+    public static VoltageReading of(VoltageAmplitude reading, VoltageAmplitude uncertainty, AmplitudeMeasure measure) {
+        return of(Require.nonNull("voltage reading", reading).toVolts(),
+                Require.nonNull("reading uncertainty", uncertainty).toVolts(), measure);
     }
 
     /**
