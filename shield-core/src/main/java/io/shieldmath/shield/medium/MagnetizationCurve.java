@@ -32,9 +32,11 @@ import java.util.Arrays;
  *       the energy converges to it;</li>
  *   <li>the secant permeability B/(µ0·H) is positive.</li>
  * </ul>
- * The end slopes are the end secants (departure from the textbook's three-point end
- * formula, on purpose): at the origin this makes the initial permeability exactly
- * B₁/(µ0·H₁) of the first table point, the value a linear solve would use. Beyond the last
+ * The end slopes depart from the textbook's three-point end formula, on purpose: at the
+ * origin the slope is the first secant, which makes the initial permeability exactly
+ * B₁/(µ0·H₁) of the first table point, the value a linear solve would use; at the last
+ * point it is 1/µ0, the slope of the saturated line that follows (or three times the last
+ * secant if that is smaller, the monotonicity bound). Beyond the last
  * point the material is taken as fully saturated, B = B_n + µ0·(H − H_n) (the
  * magnetisation stops rising), so every table segment must rise at least that steeply:
  * ΔB/ΔH ≥ µ0 (a segment below µ0 would mean a falling magnetisation).
@@ -129,7 +131,10 @@ public final class MagnetizationCurve {
         }
         double[] dd = new double[n + 1];
         dd[0] = sec[0];
-        dd[n] = sec[n - 1];
+        // The last slope joins the saturated line beyond the table (dH/dB = 1/µ0) where the
+        // monotonicity bound allows it (at most three times the last secant), so that H(B) is
+        // continuously differentiable there too and Newton's method sees no kink.
+        dd[n] = Math.min(1 / MU0, 3 * sec[n - 1]);
         for (int k = 1; k < n; k++) {
             double h0 = bb[k] - bb[k - 1];
             double h1 = bb[k + 1] - bb[k];
