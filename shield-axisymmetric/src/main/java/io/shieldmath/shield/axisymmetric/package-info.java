@@ -52,7 +52,9 @@
  * <h2>Limits</h2>
  * Quasi-static: the bodies and coils together must be small against the wavelength,
  * k0·D ≤ 0.1 (D their largest extent; about 48 MHz for D = 0.1 m); higher frequencies are
- * refused. Linear media only: no saturation, no hysteresis beyond the permeability model's
+ * refused. Linear media, except in {@link io.shieldmath.shield.axisymmetric.SaturationStudy}
+ * (magnetization curves in a uniform axial field; static by Newton's method, at frequency by
+ * the effective-permeability approximation); no hysteresis beyond the permeability model's
  * loss part. Bodies of revolution about the coils' axis only: a transverse field, a slot, a
  * seam or an off-axis hole needs a three-dimensional model. A coil with a winding section
  * carries a uniform current density; the coils' own resistance is not modelled. Results are

@@ -21,9 +21,15 @@ public final class Field {
     private final double residualAfter;
 
     Field(HarmonicSolve solve, double[] xr, double[] xi, double scale, double before, double after) {
-        this.mesh = solve.mesh;
-        this.omega = solve.omega;
-        this.wSigma = solve.wSigma;
+        this(solve.mesh, solve.omega, solve.wSigma, xr, xi, scale, before, after);
+    }
+
+    /** A field from another solver on the same mesh (the nonlinear solves of {@link SaturableSolve}). */
+    Field(Mesh mesh, double omega, double[] wSigma, double[] xr, double[] xi, double scale, double before,
+          double after) {
+        this.mesh = mesh;
+        this.omega = omega;
+        this.wSigma = wSigma;
         this.xr = xr;
         this.xi = xi;
         this.scale = scale;
