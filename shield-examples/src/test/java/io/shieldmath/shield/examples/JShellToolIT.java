@@ -251,6 +251,14 @@ class JShellToolIT {
     }
 
     @Test
+    void aChainContinuedOnALineStartingWithADotFails() {
+        // What the README's blocks once did: jshell runs the first line alone and rejects the second.
+        AssertionError e = org.junit.jupiter.api.Assertions.assertThrows(AssertionError.class,
+                () -> paste("leading dot", "String s = \"a\"\n        .trim();\n", false));
+        assertTrue(e.getMessage().contains("illegal start of expression"), e.getMessage());
+    }
+
+    @Test
     void firstCalculation() throws Exception {
         List<Unit> u = pasteBoth("## A first calculation");
         stated(u, "r.shieldingEffectivenessDb()");
