@@ -39,8 +39,21 @@ import java.util.Objects;
  * With {@code --stdin}, each line holds one frequency ({@code "10 kHz"}, or a plain decimal
  * number in Hz such as {@code 50000} or {@code 2.5e4}); blank lines and lines starting with
  * {@code #} are skipped, and one byte-order mark at the start is skipped. Standard input is
- * read as a stream: each line is answered before the next is read, in bounded memory, and
- * the output is flushed whenever the command would wait for more input.
+ * read as a stream, so the command can run as a co-process of instrument software: each
+ * frequency line is answered by exactly one output line before the next is read, in bounded
+ * memory, and the output is flushed whenever the command would wait for more input. The CSV
+ * header (or, with {@code --format json}, a header object) comes first; JSON results are
+ * then one object per line (JSON Lines). A line that is not a frequency in range, or at which
+ * the design cannot be evaluated, is answered by an error record ({@code # error: standard input line 3: ...}
+ * in CSV, {@code {"line": 3, "error": "..."}} in JSON) and by its message on standard error
+ * with the line number, and the next line is read; the exit code at the end is
+ * {@value #BAD_INPUT} if any line failed. Faults of the stream itself (not UTF-8, a line over
+ * the limit, too many lines, a read error) and output failures stop the run.
+ *
+ * <p>{@code --help} prints the usage, the options and the exit codes; {@code --version} the
+ * version the jar was built as (from the build's properties, or the jar manifest); both exit
+ * with {@value #OK}. The launcher scripts {@code shield-batch} (POSIX sh) and
+ * {@code shield-batch.cmd} in {@code shield-cli/src/main/bin} run the shaded jar.
  *
  * <p>Limits, each checked before anything is allocated for it: {@code --points} from 1 to
  * {@value #MAX_POINTS}; a line of standard input, and the {@code --band} text, at most
@@ -55,12 +68,14 @@ import java.util.Objects;
  *
  * <p>Exit codes:
  * <ul>
- *   <li>{@value #OK} ({@link #OK}): done, every result written;</li>
+ *   <li>{@value #OK} ({@link #OK}): done, every result written (also after {@code --help}
+ *       and {@code --version});</li>
  *   <li>{@value #USAGE} ({@link #USAGE}): the command line is wrong (unknown, repeated or
  *       incomplete option, a bad {@code --band}, {@code --points} or {@code --format}, a
  *       forbidden combination); the usage text follows the message;</li>
  *   <li>{@value #BAD_INPUT} ({@link #BAD_INPUT}): the design or catalogue file is not
- *       acceptable, a line of standard input is not a frequency in range, standard input holds
+ *       acceptable, a line of standard input is not a frequency in range or cannot be
+ *       evaluated (with {@code --stdin} the other lines are still answered), standard input holds
  *       no frequency or is over a limit, or the design cannot be evaluated at a frequency (an
  *       arithmetic failure);</li>
  *   <li>{@value #IO_ERROR} ({@link #IO_ERROR}): a file or standard input cannot be read (no
@@ -109,6 +124,44 @@ public final class BatchCommand {
     private static final String USAGE_TEXT = "usage: shield-batch --design FILE [--catalogue FILE] "
             + "[--band \"10 Hz to 100 kHz\" --points N | --stdin] [--format csv|json]";
 
+    private static final String HELP_TEXT = USAGE_TEXT + "\n       shield-batch --help | --version\n\n"
+            + "Evaluates a shield design file (JSON) at frequencies and writes CSV or JSON on standard output.\n\n"
+            + "  --design FILE     the design file (\"format\": \"shield-design\")\n"
+            + "  --catalogue FILE  a catalogue file whose materials extend the built-in ones\n"
+            + "  --band TEXT       a band such as \"10 Hz to 100 kHz\" (default: the design's)\n"
+            + "  --points N        log-spaced points over the band, 1 to " + MAX_POINTS + " (default: the design's)\n"
+            + "  --stdin           one frequency per input line (\"10 kHz\" or Hz as 50000); each line is\n"
+            + "                    answered by one output line, flushed, before the next is read; a bad line\n"
+            + "                    gets an error record (\"# error: standard input line N: ...\" or {\"line\": N, \"error\": ...})\n"
+            + "                    and its message on standard error, and the run goes on\n"
+            + "  --format FORMAT   csv (default) or json (with --stdin: one JSON object per line)\n"
+            + "  --help            this text\n"
+            + "  --version         the version\n\n"
+            + "Exit codes: 0 done; 2 bad command line; 3 bad design, catalogue or input line (with --stdin:\n"
+            + "some line failed); 4 a file or standard input cannot be read; 5 standard output cannot be\n"
+            + "written; 70 a fault in this program.\n";
+
+    /**
+     * The version of this command, from the build's properties packed beside the class, or
+     * {@code "unknown"} when they are missing.
+     */
+    static String version() {
+        try (InputStream in = BatchCommand.class.getResourceAsStream("shield-cli.properties")) {
+            if (in != null) {
+                java.util.Properties p = new java.util.Properties();
+                p.load(in);
+                String v = p.getProperty("version");
+                if (v != null && !v.isBlank() && !v.startsWith("$")) {
+                    return v.strip();
+                }
+            }
+        } catch (IOException e) {
+            // Fall back to the manifest.
+        }
+        String v = BatchCommand.class.getPackage().getImplementationVersion();
+        return v != null ? v : "unknown";
+    }
+
     private BatchCommand() {
     }
 
@@ -144,9 +197,17 @@ public final class BatchCommand {
         Objects.requireNonNull(out, "out");
         Objects.requireNonNull(err, "err");
         try {
-            execute(Options.parse(args), in, out);
+            if (args.length == 1 && (args[0].equals("--help") || args[0].equals("--version"))) {
+                ResultOutput.text(out, args[0].equals("--help") ? HELP_TEXT : NAME + " " + version() + "\n");
+                return OK;
+            }
+            execute(Options.parse(args), in, out, err);
             return OK;
         } catch (CommandFailure f) {
+            if (f.getMessage() == null) {
+                // Every failed line has been reported already.
+                return f.exitCode();
+            }
             err.println(NAME + ": " + Messages.clean(f.getMessage()));
             if (f.exitCode() == USAGE) {
                 err.println(USAGE_TEXT);
@@ -158,7 +219,8 @@ public final class BatchCommand {
         }
     }
 
-    private static void execute(Options o, InputStream in, OutputStream out) throws CommandFailure {
+    private static void execute(Options o, InputStream in, OutputStream out, PrintStream err)
+            throws CommandFailure {
         FrequencyBand band = o.band() == null ? null : band(o.band());
         Design design = readDesign(o);
         PlanarEvaluation evaluation;
@@ -167,10 +229,10 @@ public final class BatchCommand {
         } catch (IllegalArgumentException e) {
             throw CommandFailure.badInput("design file " + Messages.fileName(o.design()) + ": " + e.getMessage(), e);
         }
-        ResultOutput output = new ResultOutput(out, o.json(), design.title(), design.field().toString());
+        ResultOutput output = new ResultOutput(out, o.json(), design.title(), design.field().toString(), o.stdin());
         try {
             if (o.stdin()) {
-                fromStandardInput(evaluation, new LineInput(in, output::flush), output);
+                fromStandardInput(evaluation, new LineInput(in, output::flush), output, err);
             } else {
                 FrequencyBand b = band != null ? band : design.band();
                 int points = o.points() > 0 ? o.points() : design.points();
@@ -187,22 +249,42 @@ public final class BatchCommand {
         }
     }
 
-    private static void fromStandardInput(PlanarEvaluation evaluation, LineInput lines, ResultOutput output)
-            throws CommandFailure {
+    /**
+     * Answers standard input line by line. A line that is not a frequency in range, or at which
+     * the design cannot be evaluated, gets its message on standard error and an error record on
+     * standard output, and the next line is read; at the end, any such line makes the exit code
+     * {@value #BAD_INPUT}. Faults of the stream itself (not UTF-8, an over-long line, too many
+     * lines, a read error) and output failures stop the run.
+     */
+    private static void fromStandardInput(PlanarEvaluation evaluation, LineInput lines, ResultOutput output,
+            PrintStream err) throws CommandFailure {
+        long failed = 0;
         String line;
         while ((line = lines.next()) != null) {
             String s = line.strip();
             if (s.isEmpty() || s.startsWith("#")) {
                 continue;
             }
-            double hz;
+            PlanarResult result;
             try {
-                hz = frequencyHertz(s);
+                result = evaluate(evaluation, frequencyHertz(s));
             } catch (CommandFailure f) {
-                throw CommandFailure.badInput("standard input line " + lines.lineNumber() + ": " + f.getMessage(),
-                        f);
+                if (f.exitCode() != BAD_INPUT) {
+                    throw f;
+                }
+                String message = Messages.clean("standard input line " + lines.lineNumber() + ": "
+                        + f.getMessage());
+                err.println(NAME + ": " + message);
+                err.flush();
+                output.error(lines.lineNumber(), message);
+                failed++;
+                continue;
             }
-            output.write(evaluate(evaluation, hz));
+            output.write(result);
+        }
+        if (failed > 0) {
+            output.finish();
+            throw new CommandFailure(BAD_INPUT, null, null);
         }
         if (output.count() == 0) {
             throw CommandFailure.badInput("no frequencies on standard input", null);

@@ -15,7 +15,7 @@ final class CommandFailure extends Exception {
     /** The exit code. */
     private final int exitCode;
 
-    private CommandFailure(int exitCode, String message, Throwable cause) {
+    CommandFailure(int exitCode, String message, Throwable cause) {
         super(message, cause);
         this.exitCode = exitCode;
     }

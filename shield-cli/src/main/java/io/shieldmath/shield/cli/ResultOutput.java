@@ -39,9 +39,11 @@ final class ResultOutput {
 
     private final Writer writer;
     private final boolean json;
+    private final boolean jsonLines;
     private final String title;
     private final String field;
     private long count;
+    private long errors;
 
     /**
      * An output.
@@ -50,11 +52,14 @@ final class ResultOutput {
      * @param json  true for JSON, false for CSV
      * @param title the design's title for the JSON form, or null
      * @param field the incident field's description for the JSON form
+     * @param lines for JSON: one complete object per line (JSON Lines), as a co-process needs,
+     *              instead of one document that stays open until the input ends
      */
-    ResultOutput(OutputStream out, boolean json, String title, String field) {
+    ResultOutput(OutputStream out, boolean json, String title, String field, boolean lines) {
         this.writer = new BufferedWriter(new OutputStreamWriter(new Checked(out), StandardCharsets.UTF_8),
                 BUFFER_CHARS);
         this.json = json;
+        this.jsonLines = json && lines;
         this.title = title;
         this.field = field;
     }
@@ -67,23 +72,72 @@ final class ResultOutput {
         double re = finite("reflection", r.reflectionDb(), hz);
         double b = finite("multiple-reflection correction", r.multipleReflectionDb(), hz);
         try {
-            if (json) {
+            if (jsonLines) {
+                header();
+                writer.write(String.format(Locale.ROOT, "{\"frequency_hz\": %s, \"se_db\": %.6f, "
+                        + "\"absorption_db\": %.6f, \"reflection_db\": %.6f, \"multiple_reflection_db\": %.6f}\n",
+                        shortest(hz), se, a, re, b));
+            } else if (json) {
                 writer.write(count > 0 ? ",\n" : "{\n  \"design\": " + jsonString(title) + ",\n  \"field\": "
                         + jsonString(field) + ",\n  \"results\": [\n");
                 writer.write(String.format(Locale.ROOT, "    {\"frequency_hz\": %s, \"se_db\": %.6f, "
                         + "\"absorption_db\": %.6f, \"reflection_db\": %.6f, \"multiple_reflection_db\": %.6f}",
                         shortest(hz), se, a, re, b));
             } else {
-                if (count == 0) {
-                    writer.write(CSV_HEADER);
-                    writer.write('\n');
-                }
+                header();
                 writer.write(String.format(Locale.ROOT, "%s,%.6f,%.6f,%.6f,%.6f\n", shortest(hz), se, a, re, b));
             }
         } catch (IOException e) {
             throw failed(e);
         }
         count++;
+    }
+
+    /**
+     * Writes the record of an input line that gave no result, so that a program waiting for
+     * one answer line per input line is never left waiting: in CSV a line starting {@code #}
+     * ({@code # error: standard input line 3: ...}), in JSON Lines an object
+     * {@code {"line": 3, "error": "..."}}.
+     *
+     * @param line    the input line number, from 1
+     * @param message the message, already cleaned of control characters
+     */
+    void error(long line, String message) throws CommandFailure {
+        try {
+            header();
+            if (jsonLines) {
+                writer.write("{\"line\": " + line + ", \"error\": " + jsonString(message) + "}\n");
+            } else {
+                writer.write("# error: " + message + "\n");
+            }
+        } catch (IOException e) {
+            throw failed(e);
+        }
+        errors++;
+    }
+
+    /** Writes text (help, version) to {@code out} and flushes it. */
+    static void text(OutputStream out, String s) throws CommandFailure {
+        try {
+            Writer w = new OutputStreamWriter(new Checked(out), StandardCharsets.UTF_8);
+            w.write(s);
+            w.flush();
+        } catch (IOException e) {
+            throw CommandFailure.unwritable("cannot write standard output: " + InputFiles.reason(e), e);
+        }
+    }
+
+    /** The CSV header, or the JSON Lines header object, before the first record. */
+    private void header() throws IOException {
+        if (count > 0 || errors > 0) {
+            return;
+        }
+        if (jsonLines) {
+            writer.write("{\"design\": " + jsonString(title) + ", \"field\": " + jsonString(field) + "}\n");
+        } else if (!json) {
+            writer.write(CSV_HEADER);
+            writer.write('\n');
+        }
     }
 
     /** The number of results written so far (some may still be in the buffer). */
@@ -94,7 +148,7 @@ final class ResultOutput {
     /** Writes the end of the document (JSON) and flushes. */
     void finish() throws CommandFailure {
         try {
-            if (json && count > 0) {
+            if (json && !jsonLines && count > 0) {
                 writer.write("\n  ]\n}\n");
             }
         } catch (IOException e) {
