@@ -191,6 +191,24 @@ public final class CoilPair {
         return separation;
     }
 
+    /**
+     * Two pairs are equal when their coils are equal and their separations are the same
+     * number of metres.
+     *
+     * @param o the other object
+     * @return whether it is an equal pair
+     */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof CoilPair p && p.transmitter.equals(transmitter) && p.receiver.equals(receiver)
+                && Double.compare(p.separation, separation) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return (31 * transmitter.hashCode() + receiver.hashCode()) * 31 + Double.hashCode(separation);
+    }
+
     @Override
     public String toString() {
         return transmitter + " to " + receiver + ", " + separation() + " apart";
