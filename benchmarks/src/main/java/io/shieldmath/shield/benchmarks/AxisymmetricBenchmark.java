@@ -116,7 +116,7 @@ public class AxisymmetricBenchmark {
     @Benchmark
     public void sweep20(Blackhole bh) {
         bench.sweep(FrequencyBand.of(Frequency.ofHertz(100), Frequency.ofHertz(1e5)), 20)
-                .forEach(s -> bh.consume(s.shieldingEffectivenessDb()));
+                .results().forEach(s -> bh.consume(s.shieldingEffectivenessDb()));
     }
 
     /**

@@ -8,7 +8,10 @@ import io.shieldmath.shield.axisymmetric.numerics.HarmonicSolve;
 import io.shieldmath.shield.axisymmetric.numerics.Mesh;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.model.ShieldingModel;
+import java.util.Objects;
 
 /**
  * Finite bodies in a uniform applied axial field (static or alternating), solved by
@@ -30,9 +33,14 @@ import io.shieldmath.shield.internal.Require;
  * the mesh like the coil case; the tolerance is applied to the worst factor in dB.
  *
  * <p>Frequencies: 0 Hz up to the quasi-static limit (k0·D ≤ 0.1). Options return a new
- * evaluation. Immutable and thread-safe.
+ * evaluation. Immutable and thread-safe; equal evaluations (equal arrangement, sensor region
+ * and options) give bit-identical results.
+ *
+ * <p>This is one {@link ShieldingModel} of the library: its shielding effectiveness is the
+ * worst shielding factor over the sensor region, in dB, so the design tools take it as it is.
+ * Every call solves on fresh meshes; the default {@link #sweep} solves once per frequency.
  */
-public final class AxialFieldShielding {
+public final class AxialFieldShielding implements ShieldingModel<AxialFieldSolution> {
 
     private final Arrangement arrangement;
     private final SensorRegion sensor;
@@ -124,16 +132,29 @@ public final class AxialFieldShielding {
     }
 
     /**
+     * The frequencies {@link #at(Frequency)} accepts: {@value CoilCoupling#LOWEST_HERTZ} Hz up
+     * to the {@link #quasiStaticLimit()}.
+     *
+     * @return the band
+     */
+    @Override
+    public FrequencyBand validBand() {
+        return FrequencyBand.of(Frequency.ofHertz(CoilCoupling.LOWEST_HERTZ), quasiStaticLimit());
+    }
+
+    /**
      * The result in an alternating field.
      *
-     * @param frequency the frequency, up to {@link #quasiStaticLimit()}, not null
+     * @param frequency the frequency, within {@link #validBand()}, not null
      * @return the result with its estimates
-     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency exceeds the limit
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is outside the valid band
      * @throws MeshTooLargeException if a mesh would exceed the size cap
      * @throws ToleranceNotReachedException if a tolerance is set and cannot be met
      */
+    @Override
     public AxialFieldSolution at(Frequency frequency) {
-        return solve(scene.checkHertz("frequency", Require.nonNull("frequency", frequency).toHertz()));
+        return solve(scene.checkBand("frequency", Require.nonNull("frequency", frequency).toHertz(),
+                CoilCoupling.LOWEST_HERTZ));
     }
 
     /**
@@ -148,14 +169,18 @@ public final class AxialFieldShielding {
     }
 
     /**
-     * The worst shielding factor over the sensor region in dB, the primitive form for design tools.
+     * The worst shielding factor over the sensor region in dB, the primitive form for design
+     * tools. Besides the valid band it accepts 0 Hz, the static case.
      *
      * @param hertz the frequency in Hz, 0 up to the quasi-static limit
      * @return 20·log10 of the worst factor, in dB, finite
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is out of range
+     * @throws MeshTooLargeException if a mesh would exceed the size cap
+     * @throws ToleranceNotReachedException if a tolerance is set and cannot be met
      */
+    @Override
     public double shieldingEffectivenessDb(double hertz) {
-        return solve(scene.checkHertz("frequency", hertz)).worstShieldingFactor().toDecibels().toDb();
+        return solve(scene.checkHertz("frequency", hertz)).shieldingEffectivenessDb();
     }
 
     private AxialFieldSolution solve(double hz) {
@@ -182,6 +207,26 @@ public final class AxialFieldShielding {
 
     Arrangement arrangement() {
         return arrangement;
+    }
+
+    /**
+     * Two evaluations are equal when their arrangements, sensor regions and options
+     * (fineness, tolerance, unknowns cap) are equal; equal evaluations give bit-identical
+     * results.
+     *
+     * @param o the other object
+     * @return whether it is an equal evaluation
+     */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof AxialFieldShielding a && a.arrangement.equals(arrangement) && a.sensor.equals(sensor)
+                && Double.compare(a.fineness, fineness) == 0 && Double.compare(a.tolerance, tolerance) == 0
+                && a.maxUnknowns == maxUnknowns;
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(arrangement, sensor, fineness, tolerance, maxUnknowns);
     }
 
     @Override

@@ -6,6 +6,7 @@ package io.shieldmath.shield.axisymmetric;
 import io.shieldmath.shield.axisymmetric.numerics.Field;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.ShieldingFactor;
 import java.util.Locale;
 
@@ -15,9 +16,10 @@ import java.util.Locale;
  * the sensor region the worst factor is the smallest S among its sample points, and the
  * mean factor is B0 over the volume mean of |B| (samples weighted by the ring area 2πr·Δr
  * and the trapezoid rule along z). Field values are per tesla of applied field unless an
- * applied field is given. Immutable and thread-safe.
+ * applied field is given. As a {@link ShieldingResult} its shielding effectiveness is the
+ * worst factor in dB. Immutable and thread-safe.
  */
-public final class AxialFieldSolution {
+public final class AxialFieldSolution implements ShieldingResult {
 
     private final AxialFieldShielding evaluation;
     private final double hertz;
@@ -120,6 +122,17 @@ public final class AxialFieldSolution {
      */
     public ShieldingFactor worstShieldingFactor() {
         return ShieldingFactor.of(Math.pow(10, worstDb(fine, evaluation.sensor(), what) / 20));
+    }
+
+    /**
+     * The shielding effectiveness for the common evaluation contract: the worst shielding
+     * factor over the sensor region, in dB.
+     *
+     * @return 20·log10(S_worst) in dB, finite
+     */
+    @Override
+    public double shieldingEffectivenessDb() {
+        return worstDb(fine, evaluation.sensor(), what);
     }
 
     /**

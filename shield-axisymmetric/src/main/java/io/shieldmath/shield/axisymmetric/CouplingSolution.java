@@ -7,6 +7,7 @@ import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.coupling.DriveCurrent;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.model.ShieldingResult;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -20,9 +21,10 @@ import java.util.Map;
  * {@link DriveCurrent} is given; a {@code DriveCurrent} is taken at its peak amplitude and
  * losses are time averages, P = ½·I_pk²·R (so an RMS current gives the same watts as
  * I_rms²·R). The mutual inductance M is complex (the bodies' eddy currents shift its phase)
- * and the mutual impedance is jωM. Immutable and thread-safe.
+ * and the mutual impedance is jωM. As a {@link ShieldingResult} its shielding effectiveness is
+ * the insertion loss. Immutable and thread-safe.
  */
-public final class CouplingSolution {
+public final class CouplingSolution implements ShieldingResult {
 
     private final CoilCoupling evaluation;
     private final CoilSnapshot fine;
@@ -90,6 +92,7 @@ public final class CouplingSolution {
      *
      * @return the loss in dB, finite
      */
+    @Override
     public double shieldingEffectivenessDb() {
         return insertionLossDb();
     }

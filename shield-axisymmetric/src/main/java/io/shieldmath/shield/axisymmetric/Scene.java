@@ -147,6 +147,15 @@ final class Scene {
         }
     }
 
+    /** The valid-band check of the common contract: from {@code lowest} Hz to the quasi-static limit. */
+    double checkBand(String quantity, double hz, double lowest) {
+        if (hz < lowest) {
+            throw new io.shieldmath.shield.quantity.InvalidQuantityException(quantity, hz + " Hz",
+                    "from " + lowest + " Hz to " + (float) maxHertz + " Hz (use magnetostatic() for 0 Hz)");
+        }
+        return checkHertz(quantity, hz);
+    }
+
     /** The quasi-static check; names the limit and the size that sets it. */
     double checkHertz(String quantity, double hz) {
         if (!(hz >= 0 && hz <= maxHertz)) {

@@ -28,7 +28,7 @@ class SweepAndMapTest {
     @Test
     void aSweepOnOneMeshAgreesWithSingleSolvesWithinTheirEstimates() {
         CoilCoupling c = Arrangement.of(Body.disc("plate", COPPER, mm(30), mm(0.5))).between(PAIR);
-        List<CouplingSolution> sweep = c.sweep(FrequencyBand.of(kHz(1), kHz(100)), 3);
+        List<CouplingSolution> sweep = c.sweep(FrequencyBand.of(kHz(1), kHz(100)), 3).results();
         assertEquals(3, sweep.size());
         double previous = 0;
         for (CouplingSolution s : sweep) {

@@ -62,6 +62,39 @@ public final class Sweep<R extends ShieldingResult> {
         return new Sweep<>(f, out);
     }
 
+    /**
+     * A sweep of results already computed, for a model that solves many frequencies at once
+     * (for example on one mesh) instead of one {@link ShieldingModel#at} call per point.
+     *
+     * @param <R>     the model's result type
+     * @param hertz   the frequencies in Hz, increasing, 1 to {@value #MAX_POINTS} of them, not null
+     * @param results the result at each frequency, as many as frequencies, none null, not null
+     * @return the sweep
+     * @throws IllegalArgumentException if there are no frequencies, too many, they do not increase,
+     *                                  or the counts differ
+     */
+    public static <R extends ShieldingResult> Sweep<R> ofResults(double[] hertz, List<R> results) {
+        double[] f = Require.nonNull("frequencies", hertz).clone();
+        Require.nonNull("results", results);
+        checkPoints(f.length);
+        for (int i = 0; i < f.length; i++) {
+            if (!(f[i] > 0) || Double.isInfinite(f[i]) || (i > 0 && !(f[i] > f[i - 1]))) {
+                throw new IllegalArgumentException("sweep frequencies must be finite, above 0 Hz and increase; "
+                        + "frequency [" + i + "] is " + f[i] + " Hz" + (i > 0 ? " after " + f[i - 1] + " Hz" : ""));
+            }
+        }
+        if (results.size() != f.length) {
+            throw new IllegalArgumentException("a sweep of " + f.length + " frequencies needs as many results; got "
+                    + results.size());
+        }
+        for (int i = 0; i < f.length; i++) {
+            if (results.get(i) == null) {
+                throw new IllegalArgumentException("sweep result [" + i + "] at " + f[i] + " Hz is null");
+            }
+        }
+        return new Sweep<>(f, results);
+    }
+
     static void checkPoints(int points) {
         if (points < 1 || points > MAX_POINTS) {
             throw new IllegalArgumentException("number of sweep points must be from 1 to " + MAX_POINTS
