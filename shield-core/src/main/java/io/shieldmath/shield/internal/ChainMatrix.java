@@ -19,7 +19,16 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * before the shielding effectiveness stops being meaningful, so each layer's matrix is
  * divided by e^{γt}/2 and the factor is carried as a logarithm. The scaled matrix is
  * [[1+E, η(1−E)], [(1−E)/η, 1+E]] with E = e^{−2γt}, |E| ≤ 1; 1 − E is computed as
- * −expm1(−2γt) so that electrically thin layers lose no digits.
+ * −expm1(−2γt) so that electrically thin layers lose no digits. The running product is
+ * brought back by an exact power of two whenever it leaves 2^±300 (see
+ * {@link Numerics#RESCALE_ABOVE}), so any number of layers stays finite.
+ *
+ * <p>{@link SpectralChain} runs the same per-layer step (scaled layer matrix, product,
+ * rescale) for the spectral waves of the coil-coupling model, with its own impedances; the
+ * two are kept as separate loops because each is the hot path of its model and the step
+ * keeps its eight running entries in local variables (sharing it would need an array or an
+ * object per evaluation). Change one, change the other: both are tested against the same
+ * arbitrary-precision reference product.
  *
  * <p>Speed (measured by the JMH benchmarks in {@code benchmarks}): per layer two square
  * roots, one sine and cosine, one exponential and three divisions. {@link Math#expm1} is
@@ -32,6 +41,8 @@ public final class ChainMatrix {
 
     private static final double LN2 = Numerics.LN2;
     private static final double DB_PER_NEPER = Numerics.DB_PER_NEPER;
+    private static final double RESCALE_ABOVE = Numerics.RESCALE_ABOVE;
+    private static final double RESCALE_BELOW = Numerics.RESCALE_BELOW;
 
     /**
      * Below this |x|, {@link #expm1Fast} calls {@link Math#expm1}; at or above it,
@@ -134,6 +145,25 @@ public final class ChainMatrix {
             di = ndi;
             logScale += LN2 - ta;
             phase -= tb;
+            // Keep the running product in range for any number of layers: the scaled layer
+            // matrices have entries up to 2/|η| (a good conductor against free space grows the
+            // product by |η0/η| per layer, 1e4 for copper at 45 GHz), so 80 such layers would
+            // overflow. The rescale is by an exact power of two, so it changes no digit; the same
+            // rule, with the same bounds, is in SpectralChain's layer loop.
+            final double size = Math.abs(ar) + Math.abs(ai) + Math.abs(br) + Math.abs(bi)
+                    + Math.abs(cr) + Math.abs(ci) + Math.abs(dr) + Math.abs(di);
+            if (size > RESCALE_ABOVE || size < RESCALE_BELOW) {
+                final int e = Math.getExponent(size);
+                ar = Math.scalb(ar, -e);
+                ai = Math.scalb(ai, -e);
+                br = Math.scalb(br, -e);
+                bi = Math.scalb(bi, -e);
+                cr = Math.scalb(cr, -e);
+                ci = Math.scalb(ci, -e);
+                dr = Math.scalb(dr, -e);
+                di = Math.scalb(di, -e);
+                logScale -= e * LN2;
+            }
             if (parts != null) {
                 parts[2 + i] = DB_PER_NEPER * ta;
                 // R counts each layer that is not free space once, as if it stood alone between

@@ -20,6 +20,20 @@ public final class Numerics {
      */
     public static final double SATURATION_WARNING_FRACTION = 0.5;
 
+    /**
+     * The running chain-matrix products ({@link ChainMatrix}, {@link SpectralChain}) are
+     * rescaled when the sum of the magnitudes of their eight real entries leaves
+     * [{@code RESCALE_BELOW}, {@code RESCALE_ABOVE}] = [2^−300, 2^300], by an exact power of two
+     * whose exponent is carried in the product's log-scale. One layer's scaled matrix has
+     * entries of size 2, 2|η| and 2/|η|, and |η| stays between about 1e-35 and 1e7 for every
+     * medium and frequency the layer types accept, far inside the 2^±700 that one step may
+     * add before the product would overflow; so it never overflows, whatever the number of
+     * layers, and is checked after every layer.
+     */
+    public static final double RESCALE_ABOVE = 0x1p300;
+    /** The lower end of the range kept by the running products; see {@link #RESCALE_ABOVE}. */
+    public static final double RESCALE_BELOW = 0x1p-300;
+
     private Numerics() {
     }
 

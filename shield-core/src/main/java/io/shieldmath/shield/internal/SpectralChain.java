@@ -25,21 +25,33 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * [[1+E, z(1−E)], [(1−E)/z, 1+E]] with E = e^{−2γt} and 1 − E = −expm1(−2γt); the factors
  * 2·e^{−γt} are kept as a log-magnitude and a unit phasor. In addition the whole sum is
  * scaled by e^{+Λ0}, Λ0 = Σ Re γ_i(0)·t_i (the absorption at λ → 0, the smallest over λ),
- * so thick stacks neither underflow nor overflow: the scaled F at every node is at most
- * e^{λt}·|(…)| and Λ0 is returned separately.
+ * and then kept relative to its largest term so far (within e^{300}), so thick stacks and
+ * stacks with hundreds of reflecting interfaces neither underflow nor overflow; the total
+ * scale is returned separately. The running product is brought back by an
+ * exact power of two whenever it leaves 2^±300, after every layer, so any number of layers
+ * stays finite.
+ *
+ * <p>The per-layer step (scaled layer matrix, product, rescale) is the same as in
+ * {@link ChainMatrix}, with the spectral impedances in place of the plane-wave ones; the two
+ * loops are kept apart because each is its model's hot path with the eight running entries
+ * in local variables. Change one, change the other: both are tested against the same
+ * arbitrary-precision reference product.
  */
 public final class SpectralChain {
 
     /** Slots per layer in the scratch array. */
     public static final int SLOTS = 6;
     private static final double LN2 = Numerics.LN2;
-    private static final double LN10 = Math.log(10);
+    private static final double RESCALE_ABOVE = Numerics.RESCALE_ABOVE;
+    private static final double RESCALE_BELOW = Numerics.RESCALE_BELOW;
+    /** The sum is rescaled when a term exceeds e^{SUM_RANGE} times its current scale. */
+    private static final double SUM_RANGE = 300;
 
     private SpectralChain() {
     }
 
     /**
-     * Σ W_k·F(λ_k)·e^{Λ0} for one frequency.
+     * Σ W_k·F(λ_k), scaled, for one frequency.
      *
      * @param rule    the nodes and weights
      * @param t       layer thicknesses in m
@@ -47,8 +59,9 @@ public final class SpectralChain {
      * @param mu      permeability models
      * @param hz      frequency in Hz
      * @param scratch at least SLOTS·n doubles, overwritten
-     * @param out     receives [0] Re, [1] Im of the scaled sum in H, [2] Λ0 in nepers, [3] the
-     *                free-space sum over the same nodes in H (the reference for insertion loss)
+     * @param out     receives [0] Re, [1] Im of the scaled sum in H, [2] the scale in nepers (the
+     *                sum is Σ W_k·F(λ_k)·e^{out[2]}), [3] the free-space sum over the same nodes
+     *                in H (the reference for insertion loss)
      */
     public static void sum(SpectralRule rule, double[] t, double[] sigma, PermeabilityModel[] mu, double hz,
                     double[] scratch, double[] out) {
@@ -104,6 +117,7 @@ public final class SpectralChain {
         final double logPrefactor = (n + 1) * LN2 + lambda0;
         double sumR = 0;
         double sumI = 0;
+        double ref = Double.NEGATIVE_INFINITY;
         final int skipFrom = smooth ? rule.gradedFrom : 0;
         final int skipTo = smooth ? rule.uniformFrom : rule.gradedFrom;
         for (int k = 0; k < lam.length; k++) {
@@ -168,26 +182,41 @@ public final class SpectralChain {
                 final double pr = phr * cosHalf + phi * half;
                 phi = phi * cosHalf - phr * half;
                 phr = pr;
+                // The same rescale as ChainMatrix's layer loop (exact powers of two, the bounds of
+                // Numerics.RESCALE_ABOVE): a stack of good conductors and gaps grows the product by
+                // about 1/|z| per layer, so deep stacks would overflow without it.
                 final double size = Math.abs(ar) + Math.abs(ai) + Math.abs(br) + Math.abs(bi)
                         + Math.abs(cr) + Math.abs(ci) + Math.abs(dr) + Math.abs(di);
-                if (size > 1e100) {
-                    // Keep the running product in range for deep stacks of extreme layers.
-                    ar *= 1e-100;
-                    ai *= 1e-100;
-                    br *= 1e-100;
-                    bi *= 1e-100;
-                    cr *= 1e-100;
-                    ci *= 1e-100;
-                    dr *= 1e-100;
-                    di *= 1e-100;
-                    logMag -= 100 * LN10;
+                if (size > RESCALE_ABOVE || size < RESCALE_BELOW) {
+                    final int e = Math.getExponent(size);
+                    ar = Math.scalb(ar, -e);
+                    ai = Math.scalb(ai, -e);
+                    br = Math.scalb(br, -e);
+                    bi = Math.scalb(bi, -e);
+                    cr = Math.scalb(cr, -e);
+                    ci = Math.scalb(ci, -e);
+                    dr = Math.scalb(dr, -e);
+                    di = Math.scalb(di, -e);
+                    logMag -= e * LN2;
                 }
             }
-            // F·e^{Λ0} = 2^{n+1}·e^{λt − Σγt + Λ0} / S, S = A + B + C + D
-            final double sr = ar + br + cr + dr;
-            final double si = ai + bi + ci + di;
+            // F·e^{Λ0} = 2^{n+1}·e^{λt − Σγt + Λ0} / S, S = A + B + C + D. S is first brought
+            // near 1 by an exact power of two, so that x is ln |F·e^{Λ0}| to within ln 2.
+            final int g = Math.getExponent(Math.abs(ar + br + cr + dr) + Math.abs(ai + bi + ci + di));
+            final double sr = Math.scalb(ar + br + cr + dr, -g);
+            final double si = Math.scalb(ai + bi + ci + di, -g);
             final double ss = sr * sr + si * si;
-            final double mag = Math.exp(Math.min(logMag, 700)) / ss;
+            final double x = logMag - g * LN2;
+            if (x > ref + SUM_RANGE) {
+                // The sum is kept relative to e^{ref}, ref within SUM_RANGE of the largest term so
+                // far: deep stacks whose every term is below e^{−745} (reflections at hundreds of
+                // interfaces) do not underflow, and no term overflows.
+                final double f = Math.exp(ref - x);
+                sumR *= f;
+                sumI *= f;
+                ref = x;
+            }
+            final double mag = Math.exp(x - ref) / ss;
             // (phasor / S)·mag
             final double fr = (phr * sr + phi * si) * mag;
             final double fi = (phi * sr - phr * si) * mag;
@@ -196,7 +225,7 @@ public final class SpectralChain {
         }
         out[0] = sumR;
         out[1] = sumI;
-        out[2] = lambda0;
+        out[2] = ref == Double.NEGATIVE_INFINITY ? lambda0 : lambda0 - ref;
         out[3] = smooth ? rule.freeSpaceCoarse : rule.freeSpace;
     }
 }
