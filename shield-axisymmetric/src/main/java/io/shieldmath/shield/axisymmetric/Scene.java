@@ -8,6 +8,7 @@ import io.shieldmath.shield.axisymmetric.numerics.Mesh;
 import io.shieldmath.shield.axisymmetric.numerics.MeshLimitException;
 import io.shieldmath.shield.coupling.Coil;
 import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.PhysicalConstants;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,8 +38,8 @@ final class Scene {
     /** {r0, r1, z0, z1, turns} of a coil whose centre plane is at z. Uses only radius, turns, width and length. */
     static double[] section(Coil coil, double z) {
         double a = coil.radius().toMetres();
-        double w = coil.radialWidthMetres();
-        double l = coil.axialLengthMetres();
+        double w = coil.radialWidth().map(Length::toMetres).orElse(0.0);
+        double l = coil.axialLength().map(Length::toMetres).orElse(0.0);
         return new double[] {a - w / 2, a + w / 2, z - l / 2, z + l / 2, coil.turns()};
     }
 

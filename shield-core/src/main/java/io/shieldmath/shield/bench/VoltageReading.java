@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.bench;
 
+import io.shieldmath.shield.quantity.VoltageAmplitude;
 import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
@@ -49,6 +50,21 @@ public final class VoltageReading {
     }
 
     /**
+     * A reading with an absolute uncertainty, from typed amplitudes.
+     *
+     * @param reading     the reading, greater than 0, not null
+     * @param uncertainty the ± bound in the same measure, not null
+     * @param measure     how the reading is stated, not null
+     * @return the reading
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the reading is 0
+     */
+    public static VoltageReading of(VoltageAmplitude reading, VoltageAmplitude uncertainty, AmplitudeMeasure measure) {
+        return of(Require.nonNull("voltage reading", reading).toVolts(),
+                Require.nonNull("reading uncertainty", uncertainty).toVolts(), measure);
+    }
+
+    /**
      * A reading whose uncertainty is a fraction of the reading.
      *
      * @param volts    the reading in V, greater than 0
@@ -67,6 +83,7 @@ public final class VoltageReading {
      *
      * @param measure the measure, not null
      * @return the value in V
+     * @throws NullPointerException if the measure is null
      */
     public double volts(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(peak);
@@ -77,6 +94,7 @@ public final class VoltageReading {
      *
      * @param measure the measure, not null
      * @return the ± bound in V
+     * @throws NullPointerException if the measure is null
      */
     public double uncertaintyVolts(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(uncertaintyPeak);

@@ -6,6 +6,7 @@ package io.shieldmath.shield.coupling;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
+import java.util.Optional;
 
 /**
  * A circular coil on the common axis of a coil pair: a thin loop of N turns, or a winding of
@@ -61,8 +62,8 @@ public final class Coil {
      * This coil with a rectangular winding cross-section about its mean radius, modelled
      * as {@code radialRings × axialRings} rings.
      *
-     * @param radialWidth the winding's radial width, 0 m or more and less than twice the mean radius
-     * @param axialLength the winding's axial length, 0 to 10 m
+     * @param radialWidth the winding's radial width, less than twice the mean radius
+     * @param axialLength the winding's axial length, up to 10 m
      * @param radialRings the rings across the width, 1 to {@value #MAX_RINGS_PER_DIRECTION}
      * @param axialRings  the rings along the length, 1 to {@value #MAX_RINGS_PER_DIRECTION}
      * @return the new coil; this one is unchanged
@@ -83,6 +84,7 @@ public final class Coil {
      *
      * @param newTurns the number of turns, 1 to 1 000 000
      * @return the new coil; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the number of turns is out of range
      */
     public Coil withTurns(int newTurns) {
         Require.inRange("turns", newTurns, 1, 1_000_000, "turns");
@@ -108,21 +110,21 @@ public final class Coil {
     }
 
     /**
-     * The axial length of the winding (0 for a thin loop).
+     * The axial length of the winding.
      *
-     * @return the length in m
+     * @return the length, or empty for a thin loop
      */
-    public double axialLengthMetres() {
-        return length;
+    public Optional<Length> axialLength() {
+        return length > 0 ? Optional.of(Length.ofMetres(length)) : Optional.empty();
     }
 
     /**
-     * The radial width of the winding (0 for a thin loop).
+     * The radial width of the winding.
      *
-     * @return the width in m
+     * @return the width, or empty for a thin loop
      */
-    public double radialWidthMetres() {
-        return width;
+    public Optional<Length> radialWidth() {
+        return width > 0 ? Optional.of(Length.ofMetres(width)) : Optional.empty();
     }
 
     /**

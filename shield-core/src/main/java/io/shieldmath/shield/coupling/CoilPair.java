@@ -7,6 +7,7 @@ import io.shieldmath.shield.internal.Bessel;
 import io.shieldmath.shield.internal.Elliptic;
 import io.shieldmath.shield.internal.SpectralRule;
 import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.quantity.Inductance;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
 
@@ -18,7 +19,7 @@ import io.shieldmath.shield.internal.Require;
  *
  * <pre>{@code
  * CoilPair pair = CoilPair.coaxial(Coil.loop(mm(15), 20), Coil.loop(mm(15), 20), mm(30));
- * double m = pair.freeSpaceMutualInductance();            // H, Maxwell's closed form
+ * Inductance m = pair.freeSpaceMutualInductance();        // Maxwell's closed form
  * CouplingResult r = pair.through(Barrier.of(copper, mm(0.5))).at(kHz(10));
  * }</pre>
  *
@@ -157,9 +158,14 @@ public final class CoilPair {
      * (J. C. Maxwell, <i>Treatise</i>, art. 701; F. W. Grover, <i>Inductance Calculations</i>),
      * with K and E computed by the arithmetic-geometric mean to full double precision.
      *
-     * @return M in henries, greater than 0
+     * @return M, greater than 0
      */
-    public double freeSpaceMutualInductance() {
+    public Inductance freeSpaceMutualInductance() {
+        return Inductance.ofHenries(freeSpace);
+    }
+
+    /** The free-space mutual inductance in henries, for the evaluation's inner loop. */
+    double freeSpaceHenries() {
         return freeSpace;
     }
 
@@ -189,6 +195,24 @@ public final class CoilPair {
 
     double separationMetres() {
         return separation;
+    }
+
+    /**
+     * Two pairs are equal when their coils and separation are equal; equal pairs give
+     * bit-identical results.
+     *
+     * @param o the other object
+     * @return whether it is an equal pair
+     */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof CoilPair p && transmitter.equals(p.transmitter) && receiver.equals(p.receiver)
+                && Double.compare(separation, p.separation) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return (31 * transmitter.hashCode() + receiver.hashCode()) * 31 + Double.hashCode(separation);
     }
 
     @Override

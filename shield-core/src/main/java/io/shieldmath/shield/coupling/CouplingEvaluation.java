@@ -178,7 +178,7 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
         double il = lossDb(out, hz);
         double logM = Numerics.logAbs(out[0], out[1]) - out[2];
         double phase = Math.atan2(out[1], out[0]);
-        return new CouplingResult(frequency, pair.freeSpaceMutualInductance(), logM, phase, il,
+        return new CouplingResult(frequency, pair.freeSpaceHenries(), logM, phase, il,
                 planar.at(frequency));
     }
 

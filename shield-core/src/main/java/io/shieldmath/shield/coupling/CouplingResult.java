@@ -7,6 +7,7 @@ import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Complex;
 import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.quantity.Inductance;
 import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 
@@ -59,10 +60,10 @@ public final class CouplingResult implements ShieldingResult {
     /**
      * The mutual inductance without the barrier (Maxwell's closed form, summed over rings).
      *
-     * @return M_free in henries
+     * @return M_free
      */
-    public double freeSpaceMutualInductance() {
-        return freeSpace;
+    public Inductance freeSpaceMutualInductance() {
+        return Inductance.ofHenries(freeSpace);
     }
 
     /**

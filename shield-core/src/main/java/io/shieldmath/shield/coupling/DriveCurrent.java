@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.quantity.CurrentAmplitude;
 import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.quantity.Frequency;
 import java.util.Locale;
@@ -45,6 +46,31 @@ public final class DriveCurrent {
     }
 
     /**
+     * A drive current from a typed amplitude.
+     *
+     * @param amplitude the amplitude, as stated by {@code measure}; greater than 0, at most 1e6 A
+     * @param measure   how the amplitude is stated, not null
+     * @param frequency the frequency, not null
+     * @return the current
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the amplitude is out of range
+     */
+    public static DriveCurrent of(CurrentAmplitude amplitude, AmplitudeMeasure measure, Frequency frequency) {
+        return ofAmperes(Require.nonNull("drive current", amplitude).toAmperes(), measure, frequency);
+    }
+
+    /**
+     * The amplitude in a measure, as a typed value.
+     *
+     * @param measure the measure, not null
+     * @return the amplitude
+     * @throws NullPointerException if the measure is null
+     */
+    public CurrentAmplitude amplitude(AmplitudeMeasure measure) {
+        return CurrentAmplitude.ofAmperes(amperes(measure));
+    }
+
+    /**
      * A drive current given in milliamperes.
      *
      * @param milliamperes the amplitude in mA, as stated by {@code measure}
@@ -61,6 +87,7 @@ public final class DriveCurrent {
      *
      * @param measure the measure, not null
      * @return the amplitude in A
+     * @throws NullPointerException if the measure is null
      */
     public double amperes(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(peak);

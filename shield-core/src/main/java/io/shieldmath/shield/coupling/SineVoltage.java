@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.coupling;
 
+import io.shieldmath.shield.quantity.VoltageAmplitude;
 import io.shieldmath.shield.internal.Require;
 import java.util.Locale;
 
@@ -35,10 +36,34 @@ public final class SineVoltage {
     }
 
     /**
+     * A sinusoidal voltage from a typed amplitude.
+     *
+     * @param amplitude the amplitude, as stated by {@code measure}, not null
+     * @param measure   how the amplitude is stated, not null
+     * @return the voltage
+     * @throws NullPointerException if an argument is null
+     */
+    public static SineVoltage of(VoltageAmplitude amplitude, AmplitudeMeasure measure) {
+        return ofVolts(Require.nonNull("voltage amplitude", amplitude).toVolts(), measure);
+    }
+
+    /**
+     * The amplitude in a measure, as a typed value.
+     *
+     * @param measure the measure, not null
+     * @return the amplitude
+     * @throws NullPointerException if the measure is null
+     */
+    public VoltageAmplitude amplitude(AmplitudeMeasure measure) {
+        return VoltageAmplitude.ofVolts(volts(measure));
+    }
+
+    /**
      * The amplitude in a measure.
      *
      * @param measure the measure, not null
      * @return the amplitude in V
+     * @throws NullPointerException if the measure is null
      */
     public double volts(AmplitudeMeasure measure) {
         return Require.nonNull("measure", measure).fromPeak(peak);

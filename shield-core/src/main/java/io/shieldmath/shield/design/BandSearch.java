@@ -39,6 +39,7 @@ public final class BandSearch {
      * @param model the model, not null
      * @param band  the band, not null
      * @return the worst point
+     * @throws NullPointerException if an argument is null
      */
     public static WorstCase worst(ShieldingModel<?> model, FrequencyBand band) {
         Require.nonNull("band", band);
@@ -54,6 +55,8 @@ public final class BandSearch {
      * @param band   the band, not null
      * @param points the number of log-spaced sweep points before refinement, 2 or more
      * @return the worst point
+     * @throws NullPointerException if an argument is null
+     * @throws IllegalArgumentException if {@code points} is less than 2
      */
     public static WorstCase worst(ShieldingModel<?> model, FrequencyBand band, int points) {
         Require.nonNull("model", model);

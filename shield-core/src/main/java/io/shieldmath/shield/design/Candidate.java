@@ -5,6 +5,7 @@ package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.quantity.Density;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
@@ -34,16 +35,18 @@ public final class Candidate {
      *
      * @param name    a name for reports, not blank
      * @param medium  the medium or catalogue material, not null
-     * @param density the density in kg/m³, finite and greater than 0
+     * @param density the density, greater than 0
      * @return the candidate
+     * @throws NullPointerException if an argument is null
+     * @throws IllegalArgumentException if the name is blank or the density is not greater than 0
      */
-    public static Candidate of(String name, MediumSource medium, double density) {
+    public static Candidate of(String name, MediumSource medium, Density density) {
         Require.nonNull("candidate name", name);
         if (name.isBlank()) {
             throw new IllegalArgumentException("candidate name must not be blank");
         }
         return new Candidate(name.strip(), Require.nonNull("medium", medium),
-                Require.positive("density", density, "kg/m³"), OptionalDouble.empty(), OptionalDouble.empty());
+                Require.positive("density", Require.nonNull("density", density).toKilogramsPerCubicMetre(), "kg/m³"), OptionalDouble.empty(), OptionalDouble.empty());
     }
 
     /**
@@ -51,6 +54,7 @@ public final class Candidate {
      *
      * @param price the price per kg, finite and 0 or more
      * @return the new candidate
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the price is negative or not finite
      */
     public Candidate withCostPerKilogram(double price) {
         return new Candidate(name, medium, density,
@@ -62,6 +66,7 @@ public final class Candidate {
      *
      * @param price the price per m², finite and 0 or more
      * @return the new candidate
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the price is negative or not finite
      */
     public Candidate withCostPerSquareMetre(double price) {
         return new Candidate(name, medium, density, costPerKilogram,
@@ -87,11 +92,16 @@ public final class Candidate {
     }
 
     /**
-     * The density in kg/m³.
+     * The density.
      *
      * @return ρ
      */
-    public double density() {
+    public Density density() {
+        return Density.ofKilogramsPerCubicMetre(density);
+    }
+
+    /** The density in kg/m³, for the ranking's inner loop. */
+    double densityKilogramsPerCubicMetre() {
         return density;
     }
 

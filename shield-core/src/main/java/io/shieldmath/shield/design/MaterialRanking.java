@@ -5,6 +5,7 @@ package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.quantity.ArealMass;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
@@ -95,8 +96,9 @@ public final class MaterialRanking {
                 continue;
             }
             double t = s.thickness().toMetres();
-            double mass = c.density() * t;
-            meeting.add(new Ranking.Entry(0, c, s.thickness(), mass, value(c, by, t, mass), s.worst(), ""));
+            double mass = c.densityKilogramsPerCubicMetre() * t;
+            meeting.add(new Ranking.Entry(0, c, s.thickness(), ArealMass.ofKilogramsPerSquareMetre(mass),
+                    value(c, by, t, mass), s.worst(), ""));
         }
         // Sort on the value rounded to 9 significant digits, so near-equal values tie and the
         // tie is broken by thickness, then name (a transitive order, unlike a tolerance compare).

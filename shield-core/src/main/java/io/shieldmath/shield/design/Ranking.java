@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.design;
 
+import io.shieldmath.shield.quantity.ArealMass;
 import io.shieldmath.shield.quantity.Length;
 import java.util.List;
 import java.util.Locale;
@@ -80,18 +81,18 @@ public final class Ranking {
      * @param rank      1 for the best
      * @param candidate the candidate
      * @param thickness the thinnest plate that meets the target
-     * @param arealMass the plate's mass per square metre, kg/m²
+     * @param arealMass the plate's mass per square metre
      * @param value     the criterion's value, in the criterion's unit
      * @param worst     the worst SE in the band at that thickness
      * @param note      how a tie was broken, or empty
      */
-    public record Entry(int rank, Candidate candidate, Length thickness, double arealMass, double value,
+    public record Entry(int rank, Candidate candidate, Length thickness, ArealMass arealMass, double value,
                         BandSearch.WorstCase worst, String note) {
 
         @Override
         public String toString() {
             return String.format(Locale.ROOT, "%d. %s: %s, %.3f kg/m², worst %s%s", rank, candidate.name(),
-                    thickness, arealMass, worst, note.isEmpty() ? "" : " (" + note + ")");
+                    thickness, arealMass.toKilogramsPerSquareMetre(), worst, note.isEmpty() ? "" : " (" + note + ")");
         }
     }
 

@@ -54,6 +54,8 @@ public final class Requirement {
      * @param incident  the flux density at the victim without a shield, greater than 0
      * @param tolerated the flux density the victim tolerates, greater than 0
      * @return the new requirement
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a flux density is not greater than 0
      */
     public Requirement plus(FrequencyBand band, MagneticFluxDensity incident, MagneticFluxDensity tolerated) {
         Require.nonNull("band", band);
@@ -72,6 +74,8 @@ public final class Requirement {
      * @param incident  the field strength at the victim without a shield, greater than 0
      * @param tolerated the field strength the victim tolerates, greater than 0
      * @return the new requirement
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a field strength is not greater than 0
      */
     public Requirement plus(FrequencyBand band, MagneticFieldStrength incident, MagneticFieldStrength tolerated) {
         return plus(band, MagneticFluxDensity.from(Require.nonNull("incident", incident)),

@@ -98,6 +98,7 @@ public final class ThicknessSolver {
          *
          * @param incident the field, not null
          * @return the search with this field
+         * @throws NullPointerException if the field is null
          */
         public Search facing(IncidentField incident) {
             return new Search(barrier, index, Require.nonNull("field", incident), band, target);
@@ -108,6 +109,7 @@ public final class ThicknessSolver {
          *
          * @param frequencies the band, not null
          * @return the search with this band
+         * @throws NullPointerException if the band is null
          */
         public Search over(FrequencyBand frequencies) {
             return new Search(barrier, index, field, Require.nonNull("band", frequencies), target);
@@ -118,6 +120,7 @@ public final class ThicknessSolver {
          *
          * @param se the target, not null
          * @return the search with this target
+         * @throws NullPointerException if the target is null
          */
         public Search toMeet(Decibels se) {
             return new Search(barrier, index, field, band, Require.nonNull("target", se));
@@ -151,6 +154,7 @@ public final class ThicknessSolver {
      *
      * @param modelOfThickness the model for a wall thickness in metres, not null
      * @return the search, to be given a band, a target and the thickness range
+     * @throws NullPointerException if the function is null
      */
     public static AnyModel resizing(DoubleFunction<? extends ShieldingModel<?>> modelOfThickness) {
         return new AnyModel(Require.nonNull("model of thickness", modelOfThickness), null, null);
@@ -176,6 +180,7 @@ public final class ThicknessSolver {
          *
          * @param frequencies the band, not null
          * @return the search with this band
+         * @throws NullPointerException if the band is null
          */
         public AnyModel over(FrequencyBand frequencies) {
             return new AnyModel(model, Require.nonNull("band", frequencies), target);
@@ -186,6 +191,7 @@ public final class ThicknessSolver {
          *
          * @param se the target, not null
          * @return the search with this target
+         * @throws NullPointerException if the target is null
          */
         public AnyModel toMeet(Decibels se) {
             return new AnyModel(model, band, Require.nonNull("target", se));

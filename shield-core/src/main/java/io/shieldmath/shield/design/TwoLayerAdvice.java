@@ -52,6 +52,7 @@ public final class TwoLayerAdvice {
      * @param conductor the conductive layer, not null
      * @param magnetic  the high-permeability layer, not null
      * @return the question, to be given the field, the requirement, the saturation and the shell size
+     * @throws NullPointerException if a layer is null
      */
     public static Question of(Layer conductor, Layer magnetic) {
         return new Question(Require.nonNull("conductive layer", conductor),
@@ -84,6 +85,7 @@ public final class TwoLayerAdvice {
          *
          * @param incident the field, not null
          * @return the question with this field
+         * @throws NullPointerException if the field is null
          */
         public Question facing(IncidentField incident) {
             return new Question(conductor, magnetic, Require.nonNull("field", incident), requirement, saturation);
@@ -94,6 +96,7 @@ public final class TwoLayerAdvice {
          *
          * @param need the requirement, not null, not empty
          * @return the question with this requirement
+         * @throws NullPointerException if the requirement is null
          */
         public Question meeting(Requirement need) {
             return new Question(conductor, magnetic, field, Require.nonNull("requirement", need), saturation);
@@ -104,6 +107,7 @@ public final class TwoLayerAdvice {
          *
          * @param bs greater than 0, not null
          * @return the question with this saturation
+         * @throws NullPointerException if the saturation is null
          */
         public Question saturatingAt(MagneticFluxDensity bs) {
             return new Question(conductor, magnetic, field, requirement, Require.nonNull("saturation", bs));

@@ -58,7 +58,7 @@ public final class Shell implements ShieldingModel<ShellResult> {
     private final ShellShape shape;
     private final List<Layer> layers;
     private final List<Wall> walls;
-    // Primitive copies for the hot path: one entry per layer (walls and gaps).
+    // The hot-path arrays, one entry per layer (walls and gaps), from the one stack loop (StackArrays).
     final int geometryCode;
     final double[] inner;
     final double[] outer;
@@ -70,25 +70,23 @@ public final class Shell implements ShieldingModel<ShellResult> {
     private Shell(ShellShape shape, List<Layer> layers) {
         this.shape = shape;
         this.layers = Collections.unmodifiableList(new ArrayList<>(layers));
-        int n = layers.size();
-        inner = new double[n];
-        outer = new double[n];
-        sigma = new double[n];
-        mu = new PermeabilityModel[n];
+        int[] wallNumber = new int[layers.size()];
+        for (int i = 0, count = 0; i < wallNumber.length; i++) {
+            wallNumber[i] = layers.get(i).isGap() ? count : ++count;
+        }
+        StackArrays stack = StackArrays.of(i -> (layers.get(i).isGap() ? "gap after wall " : "wall ") + wallNumber[i],
+                layers.size(), i -> layers.get(i).medium(),
+                i -> layers.get(i).thickness().toMetres(), i -> layers.get(i).isGap());
+        double r0 = shape.innerRadius().toMetres();
+        inner = stack.innerRadii(r0);
+        outer = stack.outerRadii(r0);
+        sigma = stack.sigma();
+        mu = stack.muWithGapsAsNull();
         List<Wall> w = new ArrayList<>();
         List<Integer> idx = new ArrayList<>();
-        double r = shape.innerRadius().toMetres();
-        for (int i = 0; i < n; i++) {
-            Layer l = layers.get(i);
-            inner[i] = r;
-            r += l.thickness().toMetres();
-            outer[i] = r;
-            boolean isGap = l.isGap();
-            sigma[i] = Require.inRange("wall " + (w.size() + 1) + " conductivity",
-                    l.medium().conductivity().toSiemensPerMetre(), 0, StackArrays.MAX_SIEMENS_PER_METRE, "S/m");
-            mu[i] = isGap ? null : l.medium().permeability();
-            if (!isGap) {
-                w.add(new Wall(l.medium(), inner[i], outer[i]));
+        for (int i = 0; i < layers.size(); i++) {
+            if (!stack.gap()[i]) {
+                w.add(new Wall(layers.get(i).medium(), inner[i], outer[i]));
                 idx.add(i);
             }
         }

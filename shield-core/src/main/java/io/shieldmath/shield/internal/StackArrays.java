@@ -58,6 +58,23 @@ public final class StackArrays {
      */
     public static StackArrays of(String noun, int n, IntFunction<Medium> medium, IntToDoubleFunction metres,
                                  IntPredicate isGap) {
+        return of(i -> noun + " " + (i + 1), n, medium, metres, isGap);
+    }
+
+    /**
+     * The arrays of {@code n} layers.
+     *
+     * @param label     what layer i is called in messages, for example "wall 2"
+     * @param n         the number of layers, 0 or more
+     * @param medium    the medium of layer i, not null
+     * @param metres    the thickness of layer i in m
+     * @param isGap     whether layer i is a gap
+     * @return the arrays
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a conductivity is above
+     *         {@value #MAX_SIEMENS_PER_METRE} S/m
+     */
+    public static StackArrays of(IntFunction<String> label, int n, IntFunction<Medium> medium,
+                                 IntToDoubleFunction metres, IntPredicate isGap) {
         double[] t = new double[n];
         double[] s = new double[n];
         double[] e = new double[n];
@@ -68,7 +85,7 @@ public final class StackArrays {
         for (int i = 0; i < n; i++) {
             Medium md = medium.apply(i);
             t[i] = metres.applyAsDouble(i);
-            s[i] = Require.inRange(noun + " " + (i + 1) + " conductivity", md.conductivity().toSiemensPerMetre(),
+            s[i] = Require.inRange(label.apply(i) + " conductivity", md.conductivity().toSiemensPerMetre(),
                     0, MAX_SIEMENS_PER_METRE, "S/m");
             e[i] = md.permittivity().value();
             m[i] = md.permeability();
@@ -141,6 +158,56 @@ public final class StackArrays {
      */
     public boolean freeSpaceOnly() {
         return freeSpaceOnly;
+    }
+
+    /**
+     * The inner radius of each layer of a shell whose first layer starts at {@code innerRadius}
+     * (a new array: the running sum of the thicknesses).
+     *
+     * @param innerRadius the radius where the first layer starts, m
+     * @return the inner radii, m
+     */
+    public double[] innerRadii(double innerRadius) {
+        double[] r = new double[thickness.length];
+        double at = innerRadius;
+        for (int i = 0; i < r.length; i++) {
+            r[i] = at;
+            at += thickness[i];
+        }
+        return r;
+    }
+
+    /**
+     * The outer radius of each layer of a shell whose first layer starts at {@code innerRadius}
+     * (a new array, consistent with {@link #innerRadii(double)}).
+     *
+     * @param innerRadius the radius where the first layer starts, m
+     * @return the outer radii, m
+     */
+    public double[] outerRadii(double innerRadius) {
+        double[] r = new double[thickness.length];
+        double at = innerRadius;
+        for (int i = 0; i < r.length; i++) {
+            at += thickness[i];
+            r[i] = at;
+        }
+        return r;
+    }
+
+    /**
+     * The permeability models with {@code null} for each gap, the form the radial kernel
+     * reads (a new array).
+     *
+     * @return the models, null where a layer is a gap
+     */
+    public PermeabilityModel[] muWithGapsAsNull() {
+        PermeabilityModel[] m = mu.clone();
+        for (int i = 0; i < m.length; i++) {
+            if (gap[i]) {
+                m[i] = null;
+            }
+        }
+        return m;
     }
 
     /**

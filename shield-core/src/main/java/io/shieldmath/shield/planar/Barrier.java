@@ -108,6 +108,7 @@ public final class Barrier {
      *
      * @param layer the layer, not null
      * @return the new barrier
+     * @throws NullPointerException if the layer is null
      */
     public Barrier then(Layer layer) {
         List<Layer> l = new ArrayList<>(layers);
@@ -193,6 +194,7 @@ public final class Barrier {
      *
      * @param field the incident field, not null
      * @return the evaluation
+     * @throws NullPointerException if the field is null
      */
     public PlanarEvaluation facing(IncidentField field) {
         return new PlanarEvaluation(this, Require.nonNull("field", field));

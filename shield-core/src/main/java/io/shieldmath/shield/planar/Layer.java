@@ -82,6 +82,8 @@ public final class Layer {
      * @param rs        the sheet resistance, not null
      * @param thickness the film thickness, from 1 pm to 100 m
      * @return the layer
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness or the conductivity 1/(Rs·t) is out of range
      */
     public static Layer film(SheetResistance rs, Length thickness) {
         Require.nonNull("sheet resistance", rs);

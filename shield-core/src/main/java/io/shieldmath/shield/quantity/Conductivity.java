@@ -110,6 +110,8 @@ public final class Conductivity extends ScalarQuantity<Conductivity, Conductivit
      *
      * @param resistivity the resistivity, not null
      * @return the conductivity
+     * @throws NullPointerException if the resistivity is null
+     * @throws InvalidQuantityException if the conductivity 1/ρ is out of range
      */
     public static Conductivity from(Resistivity resistivity) {
         return ofSiemensPerMetre(1 / Require.nonNull("resistivity", resistivity).toSi());

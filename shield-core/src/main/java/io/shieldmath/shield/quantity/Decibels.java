@@ -104,6 +104,8 @@ public final class Decibels implements Comparable<Decibels> {
      *
      * @param other the level to add, not null
      * @return the sum; this object is unchanged
+     * @throws NullPointerException if {@code other} is null
+     * @throws InvalidQuantityException if the sum is not finite
      */
     public Decibels plus(Decibels other) {
         return of(db + Require.nonNull("other", other).db);
@@ -114,6 +116,8 @@ public final class Decibels implements Comparable<Decibels> {
      *
      * @param other the level to subtract, not null
      * @return the difference; this object is unchanged
+     * @throws NullPointerException if {@code other} is null
+     * @throws InvalidQuantityException if the difference is not finite
      */
     public Decibels minus(Decibels other) {
         return of(db - Require.nonNull("other", other).db);

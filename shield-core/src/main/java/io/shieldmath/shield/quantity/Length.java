@@ -142,6 +142,8 @@ public final class Length extends ScalarQuantity<Length, LengthUnit> {
      *
      * @param other the length to add, not null
      * @return the sum; this object is unchanged
+     * @throws NullPointerException if {@code other} is null
+     * @throws InvalidQuantityException if the sum is out of range
      */
     public Length plus(Length other) {
         return ofMetres(toSi() + Require.nonNull("other", other).toSi());

@@ -87,6 +87,8 @@ public final class MagneticFieldStrength extends ScalarQuantity<MagneticFieldStr
      *
      * @param b the flux density in air, not null
      * @return the field strength
+     * @throws NullPointerException if the flux density is null
+     * @throws InvalidQuantityException if the field strength is out of range
      */
     public static MagneticFieldStrength from(MagneticFluxDensity b) {
         return ofAmperesPerMetre(Require.nonNull("flux density", b).toSi() / PhysicalConstants.MU_0);

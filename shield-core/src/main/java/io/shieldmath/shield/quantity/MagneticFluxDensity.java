@@ -120,6 +120,8 @@ public final class MagneticFluxDensity extends ScalarQuantity<MagneticFluxDensit
      *
      * @param h the field strength, not null
      * @return the flux density
+     * @throws NullPointerException if the field strength is null
+     * @throws InvalidQuantityException if the flux density is out of range
      */
     public static MagneticFluxDensity from(MagneticFieldStrength h) {
         return Require.nonNull("field strength", h).toFluxDensityInAir();

@@ -64,6 +64,7 @@ public abstract class ScalarQuantity<Q extends ScalarQuantity<Q, U>, U extends E
      *
      * @param unit the unit, not null
      * @return the value in {@code unit}
+     * @throws NullPointerException if the unit is null
      */
     public final double in(U unit) {
         return (si - Require.nonNull("unit", unit).offset()) / unit.toSi();
@@ -76,6 +77,7 @@ public abstract class ScalarQuantity<Q extends ScalarQuantity<Q, U>, U extends E
      * @param other     the other quantity, not null
      * @param relative  the relative tolerance, zero or more
      * @return true if {@code |a − b| ≤ relative·max(|a|, |b|)}
+     * @throws NullPointerException if {@code other} is null
      */
     public final boolean isCloseTo(Q other, double relative) {
         double b = Require.nonNull("other", other).toSi();

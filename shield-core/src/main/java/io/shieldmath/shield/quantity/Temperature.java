@@ -114,6 +114,7 @@ public final class Temperature extends ScalarQuantity<Temperature, TemperatureUn
      *
      * @param other the other temperature, not null
      * @return the difference in K, finite
+     * @throws NullPointerException if {@code other} is null
      */
     public double kelvinAbove(Temperature other) {
         return toSi() - Require.nonNull("other", other).toSi();

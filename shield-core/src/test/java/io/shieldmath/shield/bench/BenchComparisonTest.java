@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The bench comparison: arithmetic of decibels of voltage ratios (20·log10 of an amplitude
- * ratio, DOMAIN §2) and sine amplitude forms (pp = 2·peak, RMS = peak/√2). Readings invented.
+ * ratio, common practice, no source) and sine amplitude forms (pp = 2·peak, RMS = peak/√2). Readings invented.
  */
 class BenchComparisonTest {
 

@@ -83,8 +83,8 @@ class CouplingProperties {
             double b = a * logUniform(r, 0.3, 3);
             Coil tx = randomCoil(r, a);
             Coil rx = randomCoil(r, b);
-            double span = 0.5 * (tx.axialLengthMetres() + rx.axialLengthMetres());
-            double d = span + Math.max(a + 0.5 * tx.radialWidthMetres(), b + 0.5 * rx.radialWidthMetres())
+            double span = 0.5 * (tx.axialLength().map(Length::toMetres).orElse(0.0) + rx.axialLength().map(Length::toMetres).orElse(0.0));
+            double d = span + Math.max(a + 0.5 * tx.radialWidth().map(Length::toMetres).orElse(0.0), b + 0.5 * rx.radialWidth().map(Length::toMetres).orElse(0.0))
                     * logUniform(r, 0.1, 10);
             CoilPair pair = CoilPair.coaxial(tx, rx, Length.ofMetres(d));
             Barrier stack = randomStack(r, 0.9 * pair.gap().toMetres(), true);

@@ -28,7 +28,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Coils, pairs, readings and results: geometry, validation edges and value semantics. Physics
- * values: Maxwell's closed form for coaxial circles (DOMAIN.md §4), Faraday's law V = jωM·I, the
+ * values: Maxwell's closed form for coaxial circles (Maxwell, Treatise art. 701; Grover 1946), Faraday's law V = jωM·I, the
  * sine amplitude forms (pp = 2·peak, RMS = peak/√2) and the 20·log10 field-ratio definition (§2).
  */
 class CouplingValuesTest {
@@ -44,13 +44,13 @@ class CouplingValuesTest {
         assertArrayEquals(new double[] {-0.002, -0.002, 0, 0, 0.002, 0.002}, c.ringOffsets(), 1e-15);
         assertEquals(6, c.ringCount());
         assertEquals(10, c.turnsPerRing(), 0);
-        assertEquals(0.004, c.radialWidthMetres(), 0);
-        assertEquals(0.006, c.axialLengthMetres(), 0);
+        assertEquals(0.004, c.radialWidth().map(Length::toMetres).orElse(0.0), 0);
+        assertEquals(0.006, c.axialLength().map(Length::toMetres).orElse(0.0), 0);
         assertEquals(Length.ofMillimetres(20), c.radius());
         assertEquals(60, c.turns());
         assertEquals(120, c.withTurns(120).turns());
         assertEquals(60, c.turns());                                         // unchanged
-        assertEquals(0.004, c.withTurns(120).radialWidthMetres(), 0);        // winding kept
+        assertEquals(0.004, c.withTurns(120).radialWidth().map(Length::toMetres).orElse(0.0), 0);        // winding kept
         assertEquals("coil r 20 mm, 60 turns, winding 0.004 m × 0.006 m as 2×3 rings", c.toString());
         Coil loop = Coil.loop(Length.ofMillimetres(20), 5);
         assertEquals("loop r 20 mm, 5 turns", loop.toString());
@@ -123,11 +123,11 @@ class CouplingValuesTest {
                 }
             }
         }
-        assertEquals(sum, p.freeSpaceMutualInductance(), 1e-13 * sum);
+        assertEquals(sum, p.freeSpaceMutualInductance().toHenries(), 1e-13 * sum);
         // Reciprocity: M12 = M21 (Neumann's formula is symmetric).
         CoilPair back = p.swapped();
         assertSame(rx, back.transmitter());
-        assertEquals(p.freeSpaceMutualInductance(), back.freeSpaceMutualInductance(), 1e-13 * sum);
+        assertEquals(p.freeSpaceMutualInductance().toHenries(), back.freeSpaceMutualInductance().toHenries(), 1e-13 * sum);
         assertEquals(p.gap(), back.gap());
         // Spectral rule and closed form agree for the free-space pair.
         assertEquals(sum, p.rule().freeSpace, 1e-9 * sum);
@@ -212,15 +212,15 @@ class CouplingValuesTest {
         CouplingResult r = CouplingPhysicsTest.SMALL.through(Barrier.of(COPPER, Length.ofMillimetres(0.3))).at(f);
         Complex m = io.shieldmath.shield.TestComplex.cm(r.shieldedMutualInductance());
         assertTrue(Math.abs(m.getImaginary()) > 1e-3 * m.abs(), "eddy currents shift the phase of M");
-        // Z = jωM (e^{jωt} convention, DOMAIN.md §2).
+        // Z = jωM (e^{jωt} convention, common practice).
         Complex z = m.multiply(Complex.I).multiply(f.angular());
         assertEquals(z.getReal(), r.mutualImpedance().real(), 1e-12 * z.abs());
         assertEquals(z.getImaginary(), r.mutualImpedance().imaginary(), 1e-12 * z.abs());
-        assertEquals(20 * Math.log10(r.freeSpaceMutualInductance() / m.abs()), r.shieldingEffectivenessDb(), 1e-9);
+        assertEquals(20 * Math.log10(r.freeSpaceMutualInductance().toHenries() / m.abs()), r.shieldingEffectivenessDb(), 1e-9);
         assertEquals(r.shieldingEffectivenessDb(), r.shieldingEffectiveness().toDb(), 0);
         assertEquals(f, r.frequency());
         assertEquals(String.format(java.util.Locale.ROOT, "IL %.2f dB at 5 kHz (M free %.6g H; planar estimate %.2f dB)",
-                r.shieldingEffectivenessDb(), r.freeSpaceMutualInductance(), r.planarEstimate().shieldingEffectivenessDb()), r.toString());
+                r.shieldingEffectivenessDb(), r.freeSpaceMutualInductance().toHenries(), r.planarEstimate().shieldingEffectivenessDb()), r.toString());
         // The drive must be at the result's frequency.
         DriveCurrent other = DriveCurrent.ofAmperes(1, AmplitudeMeasure.PEAK, Frequency.ofKilohertz(6));
         assertEquals("the drive current is at 6 kHz but this result is at 5 kHz",
@@ -288,7 +288,7 @@ class CouplingValuesTest {
 
     @Test
     void benchComparisonEdges() {
-        // 1 V without, 0.1 V with the plate: 20 dB measured (20·log10 of the field ratio, DOMAIN.md §2).
+        // 1 V without, 0.1 V with the plate: 20 dB measured (20·log10 of the field ratio, common practice, no source).
         VoltageReading open = VoltageReading.of(1, 0.1, AmplitudeMeasure.PEAK);
         VoltageReading covered = VoltageReading.of(0.1, 0.01, AmplitudeMeasure.PEAK);
         BenchComparison c = BenchComparison.of(open, covered, 19);

@@ -26,6 +26,7 @@ import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.planar.PlanarResult;
+import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
@@ -62,7 +63,7 @@ class DesignTest {
 
     @Test
     void thickGoodConductorThicknessMatchesTheAbsorptionFormula() {
-        // Where absorption dominates (B ≈ 0), t = δ·(target − R)/8.686 (DOMAIN §3, Ott 2009 ch. 6).
+        // Where absorption dominates (B ≈ 0), t = δ·(target − R)/8.686 (Ott 2009 ch. 6).
         double target = 200;
         FrequencyBand at1MHz = FrequencyBand.at(MHz(1));
         ThicknessSolution s = ThicknessSolver.minimumThickness(Barrier.of(COPPER, mm(1)), 0, PLANE, at1MHz, target,
@@ -109,15 +110,16 @@ class DesignTest {
         //   aluminium σr 0.610: R 105.9, δ 0.0846 mm, t ≈ 0.43 mm, 2700 kg/m³ → 1.2 kg/m²
         //   brass     σr 0.276: R 102.4, δ 0.1258 mm, t ≈ 0.69 mm, 8530 kg/m³ → 5.9 kg/m²
         // By areal mass: aluminium, copper, brass. By thickness: copper, aluminium, brass.
-        List<Candidate> c = List.of(Candidate.of("brass", BRASS, 8530), Candidate.of("copper", COPPER, 8890),
-                Candidate.of("aluminium", ALUMINIUM, 2700));
+        List<Candidate> c = List.of(Candidate.of("brass", BRASS, Density.ofKilogramsPerCubicMetre(8530)),
+                Candidate.of("copper", COPPER, Density.ofKilogramsPerCubicMetre(8890)),
+                Candidate.of("aluminium", ALUMINIUM, Density.ofKilogramsPerCubicMetre(2700)));
         FrequencyBand band = FrequencyBand.at(MHz(1));
         Ranking byMass = MaterialRanking.rank(c, PLANE, band, io.shieldmath.shield.quantity.Decibels.of(150), mm(5), MaterialRanking.Criterion.AREAL_MASS);
         assertEquals(List.of("aluminium", "copper", "brass"),
                 byMass.ranked().stream().map(e -> e.candidate().name()).toList());
-        assertEquals(1.16, byMass.ranked().get(0).arealMass(), 0.05);
-        assertEquals(2.83, byMass.ranked().get(1).arealMass(), 0.1);
-        assertEquals(5.86, byMass.ranked().get(2).arealMass(), 0.2);
+        assertEquals(1.16, byMass.ranked().get(0).arealMass().toKilogramsPerSquareMetre(), 0.05);
+        assertEquals(2.83, byMass.ranked().get(1).arealMass().toKilogramsPerSquareMetre(), 0.1);
+        assertEquals(5.86, byMass.ranked().get(2).arealMass().toKilogramsPerSquareMetre(), 0.2);
         Ranking byThickness = MaterialRanking.rank(c, PLANE, band, io.shieldmath.shield.quantity.Decibels.of(150), mm(5), MaterialRanking.Criterion.THICKNESS);
         assertEquals(List.of("copper", "aluminium", "brass"),
                 byThickness.ranked().stream().map(e -> e.candidate().name()).toList());
@@ -128,8 +130,8 @@ class DesignTest {
 
     @Test
     void tiesAreBrokenByThicknessThenNameAndSaidSo() {
-        List<Candidate> c = List.of(Candidate.of("copper B", COPPER, 8890).withCostPerSquareMetre(10),
-                Candidate.of("copper A", COPPER, 8890).withCostPerSquareMetre(10));
+        List<Candidate> c = List.of(Candidate.of("copper B", COPPER, Density.ofKilogramsPerCubicMetre(8890)).withCostPerSquareMetre(10),
+                Candidate.of("copper A", COPPER, Density.ofKilogramsPerCubicMetre(8890)).withCostPerSquareMetre(10));
         Ranking r = MaterialRanking.rank(c, PLANE, FrequencyBand.at(MHz(1)), io.shieldmath.shield.quantity.Decibels.of(150), mm(5),
                 MaterialRanking.Criterion.COST_PER_SQUARE_METRE);
         assertEquals("copper A", r.ranked().get(0).candidate().name());

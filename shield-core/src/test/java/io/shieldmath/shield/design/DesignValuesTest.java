@@ -15,6 +15,7 @@ import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
@@ -28,7 +29,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Design value types and the edges of their rules. Physics: SE and margins in dB as 20·log10 of a
- * field ratio (DOMAIN.md §2); the wall flux estimate B ≈ B0·D/t (DOMAIN.md §5); the rest is the
+ * field ratio (common practice, no source); the wall flux estimate B ≈ B0·D/t (the thin-shell hand estimate, from memory); the rest is the
  * classes' documented arithmetic (sample mean, n − 1 standard deviation, linear percentile).
  */
 class DesignValuesTest {
@@ -196,16 +197,17 @@ class DesignValuesTest {
 
     @Test
     void candidatesRankingsAndSolutions() {
-        Candidate cu = Candidate.of("  copper ", COPPER, 8890).withCostPerKilogram(10).withCostPerSquareMetre(30);
+        Candidate cu = Candidate.of("  copper ", COPPER, Density.ofKilogramsPerCubicMetre(8890)).withCostPerKilogram(10).withCostPerSquareMetre(30);
         assertEquals("copper", cu.name());
-        assertEquals(8890, cu.density(), 0);
+        assertEquals(8890, cu.density().toKilogramsPerCubicMetre(), 0);
         assertSame(COPPER, cu.medium());
         assertEquals(OptionalDouble.of(10), cu.costPerKilogram());
         assertEquals(OptionalDouble.of(30), cu.costPerSquareMetre());
         assertEquals("copper (8890 kg/m³)", cu.toString());
         assertEquals("candidate name must not be blank", assertThrows(IllegalArgumentException.class,
-                () -> Candidate.of(" ", COPPER, 1)).getMessage());
-        assertThrows(InvalidQuantityException.class, () -> Candidate.of("x", COPPER, 0));
+                () -> Candidate.of(" ", COPPER, Density.ofKilogramsPerCubicMetre(1))).getMessage());
+        assertThrows(InvalidQuantityException.class, () -> Candidate.of("x", COPPER, Density.ofKilogramsPerCubicMetre(0)));
+        assertThrows(NullPointerException.class, () -> Candidate.of("x", COPPER, null));
         assertThrows(InvalidQuantityException.class, () -> cu.withCostPerKilogram(-1));
         assertThrows(InvalidQuantityException.class, () -> cu.withCostPerSquareMetre(-1));
         assertEquals("areal mass", MaterialRanking.Criterion.AREAL_MASS.words());
@@ -228,14 +230,14 @@ class DesignValuesTest {
                 case COST_PER_SQUARE_METRE -> 30;
             };
             assertEquals(expected, e.value(), 1e-12 * expected, by::name);
-            assertEquals(8890 * t, e.arealMass(), 1e-12);
+            assertEquals(8890 * t, e.arealMass().toKilogramsPerSquareMetre(), 1e-12);
             assertEquals(1, e.rank());
             assertEquals(String.format(java.util.Locale.ROOT, "1. copper: %s, %.3f kg/m², worst %s", e.thickness(),
-                    e.arealMass(), e.worst()), e.toString());
+                    e.arealMass().toKilogramsPerSquareMetre(), e.worst()), e.toString());
             assertTrue(r.toString().startsWith(String.format(java.util.Locale.ROOT, "ranking by %s for 150.0 dB:\n  1. ",
                     by.words())), r::toString);
         }
-        Candidate bare = Candidate.of("bare", COPPER, 8890);
+        Candidate bare = Candidate.of("bare", COPPER, Density.ofKilogramsPerCubicMetre(8890));
         assertEquals("candidate bare has no cost per kilogram; give one with withCostPerKilogram",
                 assertThrows(IllegalArgumentException.class, () -> MaterialRanking.rank(List.of(bare), plane, band, io.shieldmath.shield.quantity.Decibels.of(150),
                         limit, MaterialRanking.Criterion.COST_BY_MASS)).getMessage());
@@ -243,9 +245,9 @@ class DesignValuesTest {
                 assertThrows(IllegalArgumentException.class, () -> MaterialRanking.rank(List.of(bare), plane, band, io.shieldmath.shield.quantity.Decibels.of(150),
                         limit, MaterialRanking.Criterion.COST_PER_SQUARE_METRE)).getMessage());
         // Equal costs per m² tie: ordered by thickness, and the note says so.
-        Candidate thin = Candidate.of("thin", COPPER, 8890).withCostPerSquareMetre(30);
+        Candidate thin = Candidate.of("thin", COPPER, Density.ofKilogramsPerCubicMetre(8890)).withCostPerSquareMetre(30);
         Candidate steelish = Candidate.of("weak", Medium.conductor("weak", Conductivity.ofMegasiemensPerMetre(1), 1),
-                8000).withCostPerSquareMetre(30);
+                Density.ofKilogramsPerCubicMetre(8000)).withCostPerSquareMetre(30);
         Ranking tie = MaterialRanking.rank(List.of(steelish, thin), plane, band, io.shieldmath.shield.quantity.Decibels.of(150), limit,
                 MaterialRanking.Criterion.COST_PER_SQUARE_METRE);
         assertEquals("thin", tie.ranked().get(0).candidate().name());

@@ -18,10 +18,10 @@ import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.PhysicalConstants;
 import org.junit.jupiter.api.Test;
 
-/** How an enclosure combines its paths (DOMAIN §5: leakage paths add as field amplitudes). */
+/** How an enclosure combines its paths (leakage paths add as field amplitudes: Ott 2009 ch. 6, common practice). */
 class EnclosureTest {
 
-    /** Invented demo material and box; the wall is aluminium 6061-T6 at about 43 % IACS (DOMAIN §6, from memory). */
+    /** Invented demo material and box; the wall is aluminium 6061-T6 at about 43 % IACS (Ott 2009 Table 6-1 and handbook tables, from memory). */
     private static final Medium ALUMINIUM = Medium.conductor("aluminium 6061-T6", iacs(43), 1);
 
     static Enclosure demoBox() {

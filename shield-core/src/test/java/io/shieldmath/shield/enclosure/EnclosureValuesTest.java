@@ -33,7 +33,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Value semantics, validation and the edges of the enclosure rules. Physics values are the rules
- * of DOMAIN.md §5 (Ott 2009 ch. 6 aperture and cut-off rules; Bethe 1944 polarizability; Kaden
+ * of the published rules (Ott 2009 ch. 6 aperture and cut-off rules; Bethe 1944 polarizability; Kaden
  * thin-shell factors; Jackson §5.12 static shells).
  */
 class EnclosureValuesTest {
@@ -355,7 +355,7 @@ class EnclosureValuesTest {
 
     @Test
     void staticResultsAndTheirHandForms() {
-        // Single thin sphere: S ≈ 1 + (2/3)µr·t/R (DOMAIN.md §5), the Kaden static factor.
+        // Single thin sphere: S ≈ 1 + (2/3)µr·t/R (Kaden 1959, from memory), the Kaden static factor.
         Shell sphere = Shell.sphere(cm(10)).wall(ALLOY, mm(1));
         StaticShielding st = sphere.staticShielding();
         assertSame(sphere, st.shell());

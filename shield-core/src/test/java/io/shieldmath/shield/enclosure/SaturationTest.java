@@ -20,14 +20,14 @@ import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.PhysicalConstants;
 import org.junit.jupiter.api.Test;
 
-/** Wall flux density against the hand estimates of DOMAIN §5, thresholds and units. */
+/** Wall flux density against the thin-shell hand estimates (from memory), thresholds and units. */
 class SaturationTest {
 
     private static final Medium ALLOY = ShellStaticTest.magnetic(50_000);
 
     @Test
     void exactLinearWallFluxTendsToTheHandEstimates() {
-        // B ≈ µ0·H0·D/t (cylinder across the field), (3/2)·µ0·H0·R/t (sphere), for µr·t/R ≫ 1 (DOMAIN §5).
+        // B ≈ µ0·H0·D/t (cylinder across the field), (3/2)·µ0·H0·R/t (sphere), for µr·t/R ≫ 1 (thin-shell hand estimates, from memory).
         MagneticFieldStrength h0 = amperesPerMetre(40);
         SaturationCheck cyl = Shell.cylinderTransverse(cm(5)).wall(ALLOY, mm(1)).saturation(h0, tesla(0.75));
         double handCyl = PhysicalConstants.MU_0 * 40 * 2 * 0.0505 / 0.001;

@@ -116,7 +116,7 @@ class ShellAlternatingTest {
 
     @ParameterizedTest
     @CsvSource({
-        // geometry, divisor of τ = µ0σRt/n (DOMAIN §5), ωτ
+        // geometry, divisor of τ = µ0σRt/n (Kaden 1959, from memory), ωτ
         "SPHERE, 3, 0.5", "SPHERE, 3, 2", "SPHERE, 3, 6",
         "CYLINDER_TRANSVERSE, 2, 0.5", "CYLINDER_TRANSVERSE, 2, 2", "CYLINDER_TRANSVERSE, 2, 6",
         "CYLINDER_AXIAL, 2, 0.5", "CYLINDER_AXIAL, 2, 2", "CYLINDER_AXIAL, 2, 6",
@@ -157,7 +157,7 @@ class ShellAlternatingTest {
             double frozenDb = Shell.sphere(m(0.05)).wall(frozen, m(0.001)).at(Hz(hz)).shieldingEffectivenessDb();
             assertEquals(frozenDb, modelDb, 1e-12 * Math.abs(frozenDb));
         }
-        // a model that keeps the low-frequency µr overstates the shell at 20 kHz (DOMAIN §1)
+        // a model that keeps the low-frequency µr overstates the shell at 20 kHz (common practice, no source)
         Medium fixed = alloy.withPermeability(PermeabilityModel.constant(40_000));
         assertTrue(Shell.sphere(m(0.05)).wall(fixed, m(0.001)).at(Hz(20_000)).shieldingEffectivenessDb()
                 > Shell.sphere(m(0.05)).wall(alloy, m(0.001)).at(Hz(20_000)).shieldingEffectivenessDb() + 3);

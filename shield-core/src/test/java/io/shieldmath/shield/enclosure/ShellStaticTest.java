@@ -31,7 +31,7 @@ class ShellStaticTest {
         return ((2 * mu + 1) * (mu + 2) - 2 * q * (mu - 1) * (mu - 1)) / (9 * mu);
     }
 
-    /** Long cylinder across the field: S = [(µ+1)² − (a/b)²(µ−1)²]/(4µ) (same boundary-value method, DOMAIN §5). */
+    /** Long cylinder across the field: S = [(µ+1)² − (a/b)²(µ−1)²]/(4µ) (same boundary-value method as Jackson §5.12). */
     static double cylinder(double mu, double a, double b) {
         double q = (a / b) * (a / b);
         return ((mu + 1) * (mu + 1) - q * (mu - 1) * (mu - 1)) / (4 * mu);
@@ -77,7 +77,7 @@ class ShellStaticTest {
     @ParameterizedTest
     @CsvSource({"1000, 0.1, 0.0001", "30000, 0.25, 0.0002", "50, 0.05, 0.00005"})
     void thinShellLimits(double mu, double a, double t) {
-        // DOMAIN §5: S ≈ 1 + (2/3)µ t/R (sphere), 1 + µ t/D (cylinder); the difference from the exact
+        // Kaden 1959 (from memory): S ≈ 1 + (2/3)µ t/R (sphere), 1 + µ t/D (cylinder); the difference from the exact
         // value is of order t/R relative, so allow 3·t/R.
         StaticShielding sp = Shell.sphere(m(a)).wall(magnetic(mu), m(t)).staticShielding();
         double r = a + t / 2;

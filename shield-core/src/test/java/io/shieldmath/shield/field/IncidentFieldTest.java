@@ -16,7 +16,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
 
 /**
- * Wave impedances of the three incident fields against the formulas of DOMAIN.md §3, evaluated
+ * Wave impedances of the three incident fields against the formulas of Ott 2009 ch. 6 and Schelkunoff 1943, evaluated
  * independently here with Commons Math {@link Complex} arithmetic.
  */
 class IncidentFieldTest {

@@ -25,7 +25,7 @@ class MediumTest {
     @Test
     void relaxationIsAFirstOrderLowPass() {
         // µ(f) = µdc/(1 + j f/fc) = µdc(1 − j f/fc)/(1 + (f/fc)²), so µ' = µdc/(1 + x²), µ'' = µdc·x/(1 + x²)
-        // (DOMAIN.md §6; algebra of the first-order relaxation).
+        // (first-order relaxation as in handbook permeability spectra, from memory; algebra of the first-order relaxation).
         RelaxationPermeability m = (RelaxationPermeability) PermeabilityModel.relaxation(20_000,
                 Frequency.ofKilohertz(2));
         assertEquals(20_000, m.real(0), 0);
@@ -143,7 +143,7 @@ class MediumTest {
 
     @Test
     void skinDepthUsesTheMagnitudeOfTheComplexPermeability() {
-        // δ = 1/sqrt(π f µ σ) (DOMAIN.md §3); annealed copper at 1 MHz: about 66 µm
+        // δ = 1/sqrt(π f µ σ) (Ott 2009 ch. 6); annealed copper at 1 MHz: about 66 µm
         // (Ott 2009, table 6-2, 0.0026 in).
         Medium copper = Medium.conductor("copper", Conductivity.ofPercentIacs(100), 1);
         double expected = 1 / Math.sqrt(Math.PI * 1e6 * MU0 * 58e6);

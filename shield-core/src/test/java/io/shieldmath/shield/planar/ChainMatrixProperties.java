@@ -43,7 +43,7 @@ class ChainMatrixProperties {
 
     @Test
     void planeWaveFreeSpaceReferenceIsExactlyOne() {
-        // |T| = 1: a free-space slab between free-space impedances reflects nothing (DOMAIN §3).
+        // |T| = 1: a free-space slab between free-space impedances reflects nothing (Schelkunoff 1943).
         IncidentField plane = IncidentField.planeWave();
         for (double hz : new double[] {1e-6, 1, 1e4, 1e9, 1e13}) {
             assertEquals(0.0, ChainMatrix.logFreeSpaceTransmission(0.37, hz, plane.impedanceReal(hz),

@@ -37,7 +37,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Branches of the planar engine and its value types. Reference values come from
  * {@link ReferenceChainMatrix} (the Schelkunoff chain-matrix product written independently with
- * Commons Math {@code Complex} and {@code FieldMatrix}) or from the closed forms of DOMAIN.md §3.
+ * Commons Math {@code Complex} and {@code FieldMatrix}) or from the closed forms of Schelkunoff 1943 and Ott 2009 ch. 6.
  */
 class PlanarBranchesTest {
 
@@ -79,7 +79,7 @@ class PlanarBranchesTest {
 
     @Test
     void absorptionOfEachLayerIsItsOwnAttenuation() {
-        // A_i = 20·log10|e^{γ_i t_i}| = 8.686·Re(γ_i)·t_i (DOMAIN.md §3), γ from the reference.
+        // A_i = 20·log10|e^{γ_i t_i}| = 8.686·Re(γ_i)·t_i (Ott 2009 ch. 6), γ from the reference.
         Barrier b = Barrier.of(COPPER, um(30)).then(STEEL, um(200));
         double hz = 2e4;
         PlanarResult r = b.facing(PLANE).at(Hz(hz));
@@ -89,7 +89,7 @@ class PlanarBranchesTest {
             double a = 20 / Math.log(10) * ReferenceChainMatrix.gamma(l, w, hz).getReal() * l.thickness().toMetres();
             assertEquals(a, r.absorptionDb(i), 1e-9 * a);
         }
-        // Reflection of a single layer: R = 20·log10|(1+K)²/(4K)|, K = Zw/η (DOMAIN.md §3).
+        // Reflection of a single layer: R = 20·log10|(1+K)²/(4K)|, K = Zw/η (Ott 2009 ch. 6).
         Barrier single = Barrier.of(COPPER, um(30));
         Complex eta = ReferenceChainMatrix.eta(single.layers().get(0), w, hz);
         Complex k = new Complex(PLANE.impedanceReal(hz), 0).divide(eta);
@@ -154,7 +154,7 @@ class PlanarBranchesTest {
         assertEquals(rising.shieldingEffectivenessDb()[0], rising.lowestSampled().shieldingEffectivenessDb(), 0);
         assertTrue(rising.shieldingEffectivenessDb()[1] > rising.shieldingEffectivenessDb()[0]);
         // A thin film in an electric near field: |Zw| = 1/(2πfε0r) falls as 1/f, so the thin-film SE
-        // ≈ 20·log10(|Zw|/(2Rs)) falls 20 dB per decade (DOMAIN.md §3) and the last point is the worst.
+        // ≈ 20·log10(|Zw|/(2Rs)) falls 20 dB per decade (Ott 2009 ch. 6) and the last point is the worst.
         IncidentField electric = IncidentField.electricNearField(Length.ofCentimetres(10), ImpedanceForm.TEXTBOOK);
         Sweep<PlanarResult> falling = Barrier.of(COPPER, um(1)).facing(electric).sweep(FrequencyBand.parse("1 kHz to 1 MHz"),
                 4);
@@ -223,7 +223,7 @@ class PlanarBranchesTest {
         assertThrows(NullPointerException.class, () -> Layer.of(null, mm(1)));
         assertThrows(NullPointerException.class, () -> Layer.of(() -> null, mm(1)));
         assertThrows(NullPointerException.class, () -> Layer.of(COPPER, null));
-        // σ·t = 1/Rs (DOMAIN.md §3).
+        // σ·t = 1/Rs (Ott 2009 ch. 6).
         Layer film = Layer.film(SheetResistance.ofOhmsPerSquare(0.5));
         assertEquals(Layer.NOMINAL_FILM_THICKNESS, film.thickness());
         assertEquals(1 / (0.5 * 1e-6), film.medium().conductivity().toSiemensPerMetre(), 1e-3);
@@ -232,7 +232,7 @@ class PlanarBranchesTest {
         assertEquals("film of 500 mΩ/sq", film.medium().name());
         assertThrows(NullPointerException.class, () -> Layer.film(null));
         assertThrows(NullPointerException.class, () -> Layer.film(SheetResistance.ofOhmsPerSquare(1), null));
-        // Thin-film limit 20·log10(1 + η0/(2Rs)) (DOMAIN.md §3), through Barrier.thenFilm.
+        // Thin-film limit 20·log10(1 + η0/(2Rs)) (Ott 2009 ch. 6), through Barrier.thenFilm.
         Barrier withFilm = Barrier.of(Medium.dielectric("PTFE", 2.1), um(1)).thenFilm(SheetResistance.ofOhmsPerSquare(1));
         double limit = 20 * Math.log10(1 + PLANE.impedanceReal(1) / 2);
         assertEquals(limit, withFilm.facing(PLANE).at(kHz(1)).shieldingEffectivenessDb(), 1e-3);
@@ -248,7 +248,7 @@ class PlanarBranchesTest {
 
     @Test
     void freeSpaceLayersGiveZeroButDielectricOrMagneticOnesDoNot() {
-        // A slab with the properties of free space gives 0 dB exactly (DOMAIN.md §2).
+        // A slab with the properties of free space gives 0 dB exactly (common practice, no source).
         assertEquals(0, Barrier.of(Medium.VACUUM, mm(3)).thenGap(mm(1)).facing(PLANE).shieldingEffectivenessDb(1e9), 0);
         // Any departure from free space (εr, µr or σ) is a real barrier, compared with the reference.
         Medium glass = Medium.of("glass", Conductivity.ZERO, PermeabilityModel.constant(1), RelativePermittivity.of(4));

@@ -14,7 +14,7 @@ import org.apache.commons.math3.linear.FieldMatrix;
  * The straightforward way to compute a planar stack, written independently of the fast
  * path with Commons Math {@link Complex} and {@link FieldMatrix}: unscaled cosh and sinh
  * (so it overflows for thick layers; use it only below a few hundred nepers), the
- * textbook formulas of DOMAIN §3 typed in as they stand.
+ * textbook formulas of Schelkunoff 1943 and Ott 2009 ch. 6 typed in as they stand.
  */
 final class ReferenceChainMatrix {
 

@@ -334,7 +334,7 @@ class BoundaryAndTextTest {
         assertEquals("level: cannot read \"1e999 dB\" (number too large); expected a number and a unit such as "
                 + "\"10 dB\"; units: dB",
                 assertThrows(InvalidQuantityException.class, () -> Decibels.parse("1e999 dB")).getMessage());
-        // 20·log10 of a field ratio (DOMAIN.md §2): 1000 → 60 dB, 0.1 → −20 dB.
+        // 20·log10 of a field ratio (common practice, no source): 1000 → 60 dB, 0.1 → −20 dB.
         assertEquals(60, Decibels.ofFieldRatio(1000).toDb(), 1e-12);
         assertEquals(-20, Decibels.ofFieldRatio(0.1).toDb(), 1e-12);
         assertEquals(0.1, Decibels.of(-20).toFieldRatio(), 1e-15);

@@ -47,7 +47,7 @@ class CatalogueTest {
         assertEquals(0, cat.get("ptfe").conductivity().toSiemensPerMetre());
     }
 
-    /** High-permeability alloys must not keep their low-frequency µr at 10 kHz (DOMAIN §1, §6). */
+    /** High-permeability alloys must not keep their low-frequency µr at 10 kHz (common practice, no source). */
     @Test
     void highPermeabilityAlloysFallWithFrequency() {
         for (String id : List.of("nickel-iron-80", "nickel-iron-50", "cobalt-amorphous", "silicon-steel",
@@ -60,7 +60,7 @@ class CatalogueTest {
             assertTrue(m.saturation().isPresent(), id + " is ferromagnetic and needs Bs");
         }
         // 80 % nickel-iron: by 10 kHz well below half its low-frequency value (common practice, no source:
-        // the bench fact of DOMAIN §1 that the alloy loses most of its permeability by then).
+        // the bench fact (common practice, no source) that the alloy loses most of its permeability by then).
         Material mu = cat.get("nickel-iron-80");
         double at10Hz = mu.permeability().staticValue();
         double at10k = Math.hypot(mu.permeability().real(1e4), mu.permeability().loss(1e4));

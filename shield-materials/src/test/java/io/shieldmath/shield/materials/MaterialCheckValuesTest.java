@@ -95,14 +95,14 @@ class MaterialCheckValuesTest {
         }
     }
 
-    /** A finish known by sheet resistance: σ·t = 1/Rs at its nominal thickness (DOMAIN §3). */
+    /** A finish known by sheet resistance: σ·t = 1/Rs at its nominal thickness (Ott 2009 ch. 6). */
     @Test
     void finishesKeepTheirSheetResistance() {
         Material paint = cat.get("paint-nickel");
         double rs = paint.sheetResistance().orElseThrow().toOhmsPerSquare();
         double t = paint.nominalThickness().orElseThrow().toMetres();
         assertEquals(1 / rs, paint.conductivity().toSiemensPerMetre() * t, 1e-12 / rs);
-        // Thin-film plane-wave limit: SE → 20·log10(1 + η0/(2Rs)), η0 = 376.730 Ω (DOMAIN §3).
+        // Thin-film plane-wave limit: SE → 20·log10(1 + η0/(2Rs)), η0 = 376.730 Ω (Ott 2009 ch. 6).
         double se = Barrier.of(DesignLayer.of(paint).toLayer()).facing(IncidentField.planeWave())
                 .shieldingEffectivenessDb(1e6);
         assertEquals(20 * Math.log10(1 + 376.730313668 / (2 * rs)), se, 0.01);
@@ -118,7 +118,7 @@ class MaterialCheckValuesTest {
     /**
      * The issue's check: a 0.5 mm plate of 80 % nickel-iron 5 cm from a loop source, with its
      * frequency-dependent permeability, gives lower SE at 10 kHz than the same plate with the constant
-     * low-frequency µr (DOMAIN §1: a model that keeps the low-frequency µr overstates the alloy).
+     * low-frequency µr (common practice, no source: a model that keeps the low-frequency µr overstates the alloy).
      */
     @Test
     void frequencyDependentNickelIronGivesLessAt10kHz() {
@@ -137,7 +137,7 @@ class MaterialCheckValuesTest {
      * low-frequency µr would promise: up to 100 Hz the two agree within 2 dB (µr there is near its
      * low-frequency value; the loss part µ'' even adds a little absorption), at 1 kHz the fall has begun,
      * at 10 kHz the constant model overstates the plate by more than 20 dB, and at 100 kHz by more still
-     * (DOMAIN §1, §6; common practice, no source).
+     * (common practice, no source).
      */
     @Test
     void overstatementOfConstantPermeabilityGrowsAcrossTheBand() {
@@ -159,7 +159,7 @@ class MaterialCheckValuesTest {
     }
 
     /**
-     * The fact of the trade in DOMAIN §1: at low frequency only the high-permeability alloy shields, but
+     * The fact of the trade (common practice, no source): at low frequency only the high-permeability alloy shields, but
      * towards 10 kHz a sub-millimetre plate of a good conductor closes the gap, because the alloy's
      * permeability has fallen far below its low-frequency value (common practice, no source). Same
      * thickness, same loop, 5 cm away. On the bench copper draws level; the infinite sheet leaves the
