@@ -213,6 +213,15 @@ public final class Opening {
     }
 
     /**
+     * The shorter side of a slot, or the diameter of a hole.
+     *
+     * @return the width, or empty for a seam
+     */
+    public Optional<Length> width() {
+        return Optional.ofNullable(width);
+    }
+
+    /**
      * The depth of the tube behind the opening.
      *
      * @return the depth, or empty if none

@@ -6,6 +6,8 @@ package io.shieldmath.shield.materials.files;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.Material;
 
+import io.shieldmath.shield.design.Requirement;
+import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.model.Sweep;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.planar.Barrier;
@@ -53,8 +55,17 @@ public final class Design {
     private final FrequencyBand band;
     private final int points;
     private final Barrier barrier;
+    private final DesignShell shell;
+    private final Requirement requirement;
 
     private Design(String title, List<DesignLayer> layers, IncidentField field, FrequencyBand band, int points) {
+        this(title, layers, field, band, points, null, Requirement.none());
+    }
+
+    private Design(String title, List<DesignLayer> layers, IncidentField field, FrequencyBand band, int points,
+                   DesignShell shell, Requirement requirement) {
+        this.shell = shell;
+        this.requirement = requirement;
         this.title = title;
         this.layers = layers;
         this.field = field;
@@ -101,7 +112,67 @@ public final class Design {
     public Design withTitle(String newTitle) {
         Require.nonNull("title", newTitle);
         String t = newTitle.isBlank() ? "" : Require.text("design title", newTitle, 200);
-        return t.equals(title) ? this : new Design(t, layers, field, band, points);
+        return t.equals(title) ? this : new Design(t, layers, field, band, points, shell, requirement);
+    }
+
+    /**
+     * Obtains a design of a closed shell with its openings (the layers are the shell's walls,
+     * innermost first).
+     *
+     * @param shell  the shell, not null
+     * @param field  the incident field the shell faces when it is not in a uniform field, not null
+     * @param band   the band to sweep, not null, within 1 µHz to 10 THz
+     * @param points the number of log-spaced sweep points, 1 to {@value #MAX_POINTS}
+     * @return the design
+     * @throws IllegalArgumentException if points is out of range
+     */
+    public static Design of(DesignShell shell, IncidentField field, FrequencyBand band, int points) {
+        Require.nonNull("shell", shell);
+        Design planar = of(shell.walls(), field, band, points);
+        return new Design("", planar.layers, field, band, points, shell, Requirement.none());
+    }
+
+    /**
+     * A copy with the source cases the design must meet.
+     *
+     * @param newRequirement the bands, incident flux densities and tolerated flux densities, not null
+     * @return the new design; this one is unchanged
+     */
+    public Design meeting(Requirement newRequirement) {
+        Require.nonNull("requirement", newRequirement);
+        return new Design(title, layers, field, band, points, shell, newRequirement);
+    }
+
+    /**
+     * The closed shell, for a shell design.
+     *
+     * @return the shell, or empty for a planar stack
+     */
+    public java.util.Optional<DesignShell> shell() {
+        return java.util.Optional.ofNullable(shell);
+    }
+
+    /**
+     * The source cases the design must meet.
+     *
+     * @return the requirement, {@link Requirement#none()} if the file gives none
+     */
+    public Requirement requirement() {
+        return requirement;
+    }
+
+    /**
+     * The model this design is evaluated with: the shell with its openings (in a uniform field
+     * or facing the incident field) for a shell design, else the planar stack facing the
+     * incident field.
+     *
+     * @return the model
+     */
+    public ShieldingModel<?> model() {
+        if (shell == null) {
+            return barrier.facing(field);
+        }
+        return shell.uniformField() ? shell.toEnclosure().inUniformField() : shell.toEnclosure().facing(field);
     }
 
     /**
@@ -159,7 +230,8 @@ public final class Design {
     }
 
     /**
-     * Sweeps the design: {@code barrier().facing(field()).sweep(band(), points())}.
+     * Sweeps the planar stack: {@code barrier().facing(field()).sweep(band(), points())}. For a
+     * shell design use {@link #model()}.
      *
      * @return the sweep, with every frequency's shielding effectiveness and its parts
      */
@@ -170,17 +242,19 @@ public final class Design {
     @Override
     public boolean equals(Object o) {
         return o instanceof Design d && d.title.equals(title) && d.layers.equals(layers) && d.field.equals(field)
-                && d.band.equals(band) && d.points == points;
+                && d.band.equals(band) && d.points == points && Objects.equals(d.shell, shell)
+                && d.requirement.equals(requirement);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(title, layers, field, band, points);
+        return Objects.hash(title, layers, field, band, points, shell, requirement);
     }
 
     @Override
     public String toString() {
         return (title.isEmpty() ? "design" : title) + ": " + layers + " facing " + field + ", " + band + ", " + points
-                + " points";
+                + " points"
+                + (shell == null ? "" : ", shell " + shell) + (requirement.entries().isEmpty() ? "" : ", " + requirement);
     }
 }

@@ -65,8 +65,16 @@ public final class DesignFile {
 
     static final String DESIGN_FORMAT = "shield-design";
 
+    /** The version this class writes; version 1 files (a planar stack only) are still read. */
+    static final int DESIGN_VERSION = 2;
+
     private static final Set<String> DESIGN_FIELDS = Set.of("format", "version", "title", "layers", "field", "band",
-            "points");
+            "points", "shell", "cases");
+    private static final Set<String> SHELL_FIELDS = Set.of("form", "sides", "radius", "walls", "openings",
+            "exposure");
+    private static final Set<String> OPENING_FIELDS = Set.of("kind", "diameter", "count", "length", "width",
+            "tubeDepth", "victimDistance", "name");
+    private static final Set<String> CASE_FIELDS = Set.of("band", "incident", "tolerated");
     private static final Set<String> LAYER_FIELDS = Set.of("material", "thickness", "temperature", "gap", "medium");
     private static final Set<String> MEDIUM_FIELDS = Set.of("name", "conductivity", "permeability", "permittivity");
     private static final Set<String> FIELD_FIELDS = Set.of("kind", "distance", "impedance");
@@ -126,7 +134,7 @@ public final class DesignFile {
      * <pre>
      * {
      *   "format": "shield-design",
-     *   "version": 1,
+     *   "version": 2,
      *   "title": "lid for a fluxgate housing",            (optional)
      *   "layers": [
      *     { "material": "copper-annealed", "thickness": "0.3 mm" },
@@ -139,9 +147,24 @@ public final class DesignFile {
      *   ],
      *   "field": { "kind": "magnetic-near-field", "distance": "6 cm", "impedance": "exact-dipole" },
      *   "band": "10 Hz to 100 kHz",
-     *   "points": 41
+     *   "points": 41,
+     *   "cases": [                                         (optional: every source case to meet)
+     *     { "band": "19 kHz to 21 kHz", "incident": "8 µT", "tolerated": "5 nT" }
+     *   ]
      * }
      * </pre>
+     *
+     * A closed shell replaces {@code "layers"} with
+     * <pre>
+     *   "shell": { "form": "box", "sides": ["8 cm", "6 cm", "3 cm"],     (or "radius" for
+     *              "walls": [ ...layers, innermost first... ],          sphere, cylinder-transverse,
+     *              "openings": [ { "kind": "holes", "diameter": "3 mm",  cylinder-axial)
+     *                              "count": 24, "name": "vent" } ],
+     *              "exposure": "uniform" }                              (or "incident-field")
+     * </pre>
+     * Opening kinds: {@code holes} (diameter, count), {@code slot} (length, width),
+     * {@code seam} (length), each with optional {@code tubeDepth}, {@code victimDistance} and
+     * {@code name}. Version 1 files (a planar stack, no shell or cases) are still read.
      *
      * Field kinds: {@code plane-wave} (no distance or impedance), {@code magnetic-near-field},
      * {@code electric-near-field}; impedance forms {@code textbook}, {@code exact-dipole}. A
@@ -170,24 +193,152 @@ public final class DesignFile {
 
     private static Design readDesign(Node root, Catalogue catalogue) {
         Node.Fields f = root.object(DESIGN_FIELDS);
-        header(f, DESIGN_FORMAT);
-        Node layersNode = f.required("layers");
-        List<Node> entries = layersNode.array(1, Barrier.MAX_LAYERS);
-        List<DesignLayer> layers = new ArrayList<>(entries.size());
-        for (Node e : entries) {
-            layers.add(readLayer(e, catalogue));
+        Node fmt = f.required("format");
+        if (!fmt.string().equals(DESIGN_FORMAT)) {
+            throw fmt.error("expected \"" + DESIGN_FORMAT + "\", found \"" + fmt.string() + "\"");
         }
+        int version = f.required("version").integer(1, DESIGN_VERSION);
+        if (version == 1) {
+            root.object(Set.of("format", "version", "title", "layers", "field", "band", "points"));
+        }
+        Node shellNode = f.optional("shell");
+        if (shellNode != null && f.has("layers")) {
+            throw root.error("a design has either \"layers\" (a planar stack) or \"shell\", not both");
+        }
+        DesignShell shell = shellNode == null ? null : readShell(shellNode, catalogue);
+        List<DesignLayer> layers = shell == null ? readLayers(f.required("layers"), catalogue) : null;
         IncidentField field = readField(f.required("field"));
         Node bandNode = f.required("band");
         FrequencyBand band = bandNode.quantity(FrequencyBand::parse, "10 Hz to 100 kHz");
         int points = f.required("points").integer(1, Design.MAX_POINTS);
-        Design d = at(bandNode, () -> Design.of(layers, field, band, points));
+        Design planar = at(bandNode, () -> shell == null ? Design.of(layers, field, band, points)
+                : Design.of(shell, field, band, points));
+        Node casesNode = f.optional("cases");
+        Design d = casesNode == null ? planar : planar.meeting(readCases(casesNode));
         Node title = f.optional("title");
         if (title == null) {
             return d;
         }
         String t = title.string();
         return at(title, () -> d.withTitle(t));
+    }
+
+    private static List<DesignLayer> readLayers(Node layersNode, Catalogue catalogue) {
+        List<Node> entries = layersNode.array(1, Barrier.MAX_LAYERS);
+        List<DesignLayer> layers = new ArrayList<>(entries.size());
+        for (Node e : entries) {
+            layers.add(readLayer(e, catalogue));
+        }
+        return layers;
+    }
+
+    private static DesignShell readShell(Node n, Catalogue catalogue) {
+        Node.Fields f = n.object(SHELL_FIELDS);
+        Node formNode = f.required("form");
+        String form = formNode.string();
+        Node wallsNode = f.required("walls");
+        List<DesignLayer> walls = readLayers(wallsNode, catalogue);
+        DesignShell shell;
+        if (form.equals("box")) {
+            Node sidesNode = f.required("sides");
+            List<Node> sides = sidesNode.array(3, 3);
+            List<Length> l = new ArrayList<>(3);
+            for (Node s : sides) {
+                l.add(s.quantity(Length::parse, "8 cm"));
+            }
+            shell = at(wallsNode, () -> DesignShell.box(l.get(0), l.get(1), l.get(2), walls));
+        } else {
+            DesignShell.Form fm = switch (form) {
+                case "sphere" -> DesignShell.Form.SPHERE;
+                case "cylinder-transverse" -> DesignShell.Form.CYLINDER_TRANSVERSE;
+                case "cylinder-axial" -> DesignShell.Form.CYLINDER_AXIAL;
+                default -> throw formNode.error("unknown shell form \"" + form
+                        + "\"; known: box, sphere, cylinder-transverse, cylinder-axial");
+            };
+            Node rn = f.required("radius");
+            Length r = rn.quantity(Length::parse, "4 cm");
+            shell = at(rn, () -> DesignShell.round(fm, r, walls));
+        }
+        Node openingsNode = f.optional("openings");
+        if (openingsNode != null) {
+            for (Node o : openingsNode.array(0, io.shieldmath.shield.enclosure.Enclosure.MAX_OPENINGS)) {
+                io.shieldmath.shield.enclosure.Opening op = readOpening(o);
+                DesignShell before = shell;
+                shell = at(o, () -> before.withOpening(op));
+            }
+        }
+        Node exposure = f.optional("exposure");
+        if (exposure != null) {
+            String e = exposure.string();
+            if (e.equals("incident-field")) {
+                shell = shell.inUniformField(false);
+            } else if (!e.equals("uniform")) {
+                throw exposure.error("unknown exposure \"" + e + "\"; known: uniform, incident-field");
+            }
+        }
+        return shell;
+    }
+
+    private static io.shieldmath.shield.enclosure.Opening readOpening(Node n) {
+        Node.Fields f = n.object(OPENING_FIELDS);
+        Node kindNode = f.required("kind");
+        String kind = kindNode.string();
+        io.shieldmath.shield.enclosure.Opening o;
+        switch (kind) {
+            case "holes": {
+                Length d = f.required("diameter").quantity(Length::parse, "3 mm");
+                Node cn = f.optional("count");
+                int c = cn == null ? 1 : cn.integer(1, io.shieldmath.shield.enclosure.Opening.MAX_COUNT);
+                o = at(f.required("diameter"), () -> io.shieldmath.shield.enclosure.Opening.holes(d, c));
+                break;
+            }
+            case "slot": {
+                Length l = f.required("length").quantity(Length::parse, "20 mm");
+                Length w = f.required("width").quantity(Length::parse, "1 mm");
+                o = at(f.required("width"), () -> io.shieldmath.shield.enclosure.Opening.slot(l, w));
+                break;
+            }
+            case "seam": {
+                Length l = f.required("length").quantity(Length::parse, "50 mm");
+                o = at(f.required("length"), () -> io.shieldmath.shield.enclosure.Opening.seam(l));
+                break;
+            }
+            default:
+                throw kindNode.error("unknown opening kind \"" + kind + "\"; known: holes, slot, seam");
+        }
+        Node depth = f.optional("tubeDepth");
+        if (depth != null) {
+            Length t = depth.quantity(Length::parse, "5 mm");
+            io.shieldmath.shield.enclosure.Opening before = o;
+            o = at(depth, () -> before.throughTube(t));
+        }
+        Node victim = f.optional("victimDistance");
+        if (victim != null) {
+            Length v = victim.quantity(Length::parse, "2 cm");
+            io.shieldmath.shield.enclosure.Opening before = o;
+            o = at(victim, () -> before.atDistance(v));
+        }
+        Node name = f.optional("name");
+        if (name != null) {
+            String s = name.string();
+            io.shieldmath.shield.enclosure.Opening before = o;
+            o = at(name, () -> before.named(s));
+        }
+        return o;
+    }
+
+    private static io.shieldmath.shield.design.Requirement readCases(Node n) {
+        io.shieldmath.shield.design.Requirement r = io.shieldmath.shield.design.Requirement.none();
+        for (Node c : n.array(0, 1000)) {
+            Node.Fields f = c.object(CASE_FIELDS);
+            Node bn = f.required("band");
+            FrequencyBand b = bn.quantity(FrequencyBand::parse, "19 kHz to 21 kHz");
+            MagneticFluxDensity in = f.required("incident").quantity(MagneticFluxDensity::parse, "8 µT");
+            MagneticFluxDensity tol = f.required("tolerated").quantity(MagneticFluxDensity::parse, "5 nT");
+            io.shieldmath.shield.design.Requirement before = r;
+            r = at(c, () -> before.plus(b, in, tol));
+        }
+        return r;
     }
 
     private static DesignLayer readLayer(Node n, Catalogue catalogue) {
@@ -279,12 +430,62 @@ public final class DesignFile {
     private static String writeDesign(Design d) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", DESIGN_FORMAT);
-        root.put("version", VERSION);
+        root.put("version", DESIGN_VERSION);
         if (!d.title().isEmpty()) {
             root.put("title", d.title());
         }
-        ArrayNode layers = root.putArray("layers");
-        for (DesignLayer l : d.layers()) {
+        if (d.shell().isPresent()) {
+            writeShell(root.putObject("shell"), d.shell().get());
+        } else {
+            writeLayers(root.putArray("layers"), d.layers());
+        }
+        writeFieldBandCases(root, d);
+        return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
+    }
+
+    private static void writeShell(ObjectNode o, DesignShell s) {
+        o.put("form", switch (s.form()) {
+            case BOX -> "box";
+            case SPHERE -> "sphere";
+            case CYLINDER_TRANSVERSE -> "cylinder-transverse";
+            case CYLINDER_AXIAL -> "cylinder-axial";
+        });
+        if (s.form() == DesignShell.Form.BOX) {
+            ArrayNode sides = o.putArray("sides");
+            for (Length l : s.sizes()) {
+                sides.add(text(l));
+            }
+        } else {
+            o.put("radius", text(s.sizes().get(0)));
+        }
+        writeLayers(o.putArray("walls"), s.walls());
+        ArrayNode openings = o.putArray("openings");
+        for (io.shieldmath.shield.enclosure.Opening op : s.openings()) {
+            ObjectNode on = openings.addObject();
+            switch (op.kind()) {
+                case HOLE:
+                    on.put("kind", "holes");
+                    on.put("diameter", text(op.largestDimension()));
+                    on.put("count", op.count());
+                    break;
+                case SLOT:
+                    on.put("kind", "slot");
+                    on.put("length", text(op.largestDimension()));
+                    on.put("width", text(op.width().get()));
+                    break;
+                default:
+                    on.put("kind", "seam");
+                    on.put("length", text(op.largestDimension()));
+            }
+            op.tubeDepth().ifPresent(t -> on.put("tubeDepth", text(t)));
+            op.victimDistance().ifPresent(t -> on.put("victimDistance", text(t)));
+            on.put("name", op.name());
+        }
+        o.put("exposure", s.uniformField() ? "uniform" : "incident-field");
+    }
+
+    private static void writeLayers(ArrayNode layers, List<DesignLayer> list) {
+        for (DesignLayer l : list) {
             ObjectNode o = layers.addObject();
             switch (l.kind()) {
                 case GAP:
@@ -308,6 +509,9 @@ public final class DesignFile {
                     }
             }
         }
+    }
+
+    private static void writeFieldBandCases(ObjectNode root, Design d) {
         ObjectNode field = root.putObject("field");
         IncidentField fld = d.field();
         switch (fld.kind()) {
@@ -322,6 +526,14 @@ public final class DesignFile {
         }
         root.put("band", text(d.band().low()) + " to " + text(d.band().high()));
         root.put("points", d.points());
-        return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
+        if (!d.requirement().entries().isEmpty()) {
+            ArrayNode cases = root.putArray("cases");
+            for (io.shieldmath.shield.design.Requirement.Entry e : d.requirement().entries()) {
+                ObjectNode c = cases.addObject();
+                c.put("band", text(e.band().low()) + " to " + text(e.band().high()));
+                c.put("incident", text(e.incident()));
+                c.put("tolerated", text(e.tolerated()));
+            }
+        }
     }
 }

@@ -234,6 +234,59 @@ final class RandomMaterials {
         double lo = logUniform(r, 1e-3, 1e9);
         FrequencyBand band = FrequencyBand.of(Frequency.ofHertz(lo), Frequency.ofHertz(lo * logUniform(r, 1, 1e3)));
         Design d = Design.of(layers, field(r), band, 1 + r.nextInt(Design.MAX_POINTS));
+        if (r.nextBoolean() && layers.get(0).kind() != DesignLayer.Kind.GAP) {
+            d = Design.of(shell(r, layers), d.field(), band, d.points());
+        }
+        if (r.nextBoolean()) {
+            d = d.meeting(cases(r));
+        }
         return r.nextBoolean() ? d.withTitle(text(r)) : d;
+    }
+
+    /** A closed shell of random form, sizes and openings around the given walls. */
+    static DesignShell shell(Random r, List<DesignLayer> walls) {
+        Length a = Length.ofMetres(logUniform(r, 0.01, 1));
+        DesignShell s;
+        if (r.nextBoolean()) {
+            s = DesignShell.box(a, Length.ofMetres(a.toMetres() * (0.6 + 0.8 * r.nextDouble())),
+                    Length.ofMetres(a.toMetres() * (0.6 + 0.8 * r.nextDouble())), walls);
+        } else {
+            DesignShell.Form[] round = {DesignShell.Form.SPHERE, DesignShell.Form.CYLINDER_TRANSVERSE,
+                    DesignShell.Form.CYLINDER_AXIAL};
+            s = DesignShell.round(round[r.nextInt(3)], a, walls);
+        }
+        for (int i = r.nextInt(4); i > 0; i--) {
+            Length l = Length.ofMetres(logUniform(r, 1e-4, 0.05));
+            io.shieldmath.shield.enclosure.Opening o = switch (r.nextInt(3)) {
+                case 0 -> io.shieldmath.shield.enclosure.Opening.holes(l, 1 + r.nextInt(1000));
+                case 1 -> io.shieldmath.shield.enclosure.Opening.slot(l, Length.ofMetres(l.toMetres() * r.nextDouble()
+                        * 0.9 + l.toMetres() * 0.05));
+                default -> io.shieldmath.shield.enclosure.Opening.seam(l);
+            };
+            if (r.nextBoolean() && o.kind() != io.shieldmath.shield.enclosure.Opening.Kind.SEAM) {
+                o = o.throughTube(Length.ofMetres(logUniform(r, 1e-4, 0.05)));
+            }
+            if (r.nextBoolean()) {
+                o = o.atDistance(Length.ofMetres(logUniform(r, 1e-3, 0.5)));
+            }
+            if (r.nextBoolean()) {
+                o = o.named(text(r));
+            }
+            s = s.withOpening(o);
+        }
+        return s.inUniformField(r.nextBoolean());
+    }
+
+    /** Random source cases: bands with incident and tolerated flux densities. */
+    static io.shieldmath.shield.design.Requirement cases(Random r) {
+        io.shieldmath.shield.design.Requirement q = io.shieldmath.shield.design.Requirement.none();
+        for (int i = 1 + r.nextInt(5); i > 0; i--) {
+            double lo = logUniform(r, 1, 1e6);
+            FrequencyBand b = r.nextBoolean() ? FrequencyBand.at(Frequency.ofHertz(lo))
+                    : FrequencyBand.of(Frequency.ofHertz(lo), Frequency.ofHertz(lo * logUniform(r, 1, 10)));
+            q = q.plus(b, MagneticFluxDensity.ofTesla(logUniform(r, 1e-9, 1e-2)),
+                    MagneticFluxDensity.ofTesla(logUniform(r, 1e-12, 1e-6)));
+        }
+        return q;
     }
 }
