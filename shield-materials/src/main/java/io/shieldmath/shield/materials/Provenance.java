@@ -24,7 +24,7 @@ import java.util.regex.Pattern;
  *     trade with no source to cite);</li>
  * <li>{@link #DERIVED}: the text starts with "derived" (computed from other numbers of
  *     the entry, such as σ = 1/(Rs·t));</li>
- * <li>{@link #CITED}: anything else: the text names a source without recording that the
+ * <li>{@link #CITED}: anything else: the text names a source without saying that the
  *     value was checked against it.</li>
  * </ul>
  *
