@@ -48,6 +48,37 @@ public final class HarmonicSolve {
      * @param bodiesAsAir true to give every body the properties of air (the reference solve)
      */
     public HarmonicSolve(Mesh mesh, double hertz, boolean bodiesAsAir) {
+        this(mesh, hertz, bodiesAsAir, true);
+    }
+
+    /**
+     * The assembled matrix S = K(ν) + jω·M(σ) before factorisation, in the band storage of
+     * {@link BandedLdlt} (half-bandwidth {@link Mesh#bandwidth()}): element 0 the real parts,
+     * element 1 the imaginary parts (all zero for a real static system). The solver never
+     * needs it; baselines and tests do.
+     *
+     * @param mesh        the mesh
+     * @param hertz       the frequency, 0 or more
+     * @param bodiesAsAir true for the reference solve with every body as air
+     * @return {real parts, imaginary parts}, each n·(b+1) entries
+     */
+    public static double[][] assembledBand(Mesh mesh, double hertz, boolean bodiesAsAir) {
+        HarmonicSolve s = new HarmonicSolve(mesh, hertz, bodiesAsAir, false);
+        return new double[][] {s.re, s.im != null ? s.im : new double[s.re.length]};
+    }
+
+    /**
+     * The right-hand side of a coil carrying 1 A peak (the load vector of {@link #coilField}).
+     *
+     * @param mesh the mesh
+     * @param coil the coil's index in the layout
+     * @return a new array of the mesh's unknowns
+     */
+    public static double[] coilLoad(Mesh mesh, int coil) {
+        return mesh.load(coil).clone();
+    }
+
+    private HarmonicSolve(Mesh mesh, double hertz, boolean bodiesAsAir, boolean factor) {
         this.mesh = mesh;
         this.omega = 2 * Math.PI * hertz;
         int m = mesh.materials;
@@ -106,6 +137,10 @@ public final class HarmonicSolve {
                     }
                 }
             }
+        }
+        if (!factor) {
+            pivotRatio = 0;
+            return;
         }
         pivotRatio = real ? BandedLdlt.factorReal(n, b, re) : BandedLdlt.factor(n, b, re, im);
     }
