@@ -83,7 +83,7 @@ public final class SeChart {
         int w = 1000;
         int h = 620;
         ChartUtils.saveChartAsPNG(png.toFile(), chart, w, h);
-        SvgOutput.write(svg, w, h, g -> chart.draw(g, new Rectangle(0, 0, w, h)));
+        PictureFiles.writeSvg(svg, w, h, g -> chart.draw(g, new Rectangle(0, 0, w, h)));
     }
 
     /** Distinct colours that read on white. */
