@@ -30,9 +30,12 @@ import java.util.List;
  */
 public final class FieldMapExample {
 
-    /** The picture size in pixels. */
+    /** The pictures' width in pixels. */
     static final int WIDTH = 900;
-    static final int HEIGHT = 760;
+    /** The bench picture's height in pixels (a wide, flat scene). */
+    static final int BENCH_HEIGHT = 520;
+    /** The can picture's height in pixels. */
+    static final int CAN_HEIGHT = 760;
 
     /** The applied field of the can case (illustrative). */
     static final MagneticFluxDensity APPLIED = uT(50);
@@ -66,10 +69,10 @@ public final class FieldMapExample {
         FieldMapPicture can = canCase();
         Path[] files = {folder.resolve("field-map-bench.png"), folder.resolve("field-map-bench.svg"),
             folder.resolve("field-map-can.png"), folder.resolve("field-map-can.svg")};
-        bench.writePng(files[0], WIDTH, HEIGHT);
-        bench.writeSvg(files[1], WIDTH, HEIGHT);
-        can.writePng(files[2], WIDTH, HEIGHT);
-        can.writeSvg(files[3], WIDTH, HEIGHT);
+        bench.writePng(files[0], WIDTH, BENCH_HEIGHT);
+        bench.writeSvg(files[1], WIDTH, BENCH_HEIGHT);
+        can.writePng(files[2], WIDTH, CAN_HEIGHT);
+        can.writeSvg(files[3], WIDTH, CAN_HEIGHT);
         return List.of(files);
     }
 
