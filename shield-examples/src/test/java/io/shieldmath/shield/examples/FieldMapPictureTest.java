@@ -9,6 +9,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import io.shieldmath.shield.axisymmetric.Arrangement;
 import io.shieldmath.shield.axisymmetric.AxialFieldSolution;
+import io.shieldmath.shield.axisymmetric.Body;
 import io.shieldmath.shield.axisymmetric.Point;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import java.awt.image.BufferedImage;
@@ -124,6 +125,21 @@ class FieldMapPictureTest {
             // within 2 L* (the map's grid interpolates between solver samples)
             assertEquals(Colours.lightness(expected), shown, 2.0, "at r " + at[0] + " m");
         }
+    }
+
+    @Test
+    void aCanIsOutlinedWithoutTheSeamsBetweenWallAndCaps() {
+        // The can of the example: inner radius 20 mm, wall and caps 1 mm, 60 mm long, a 4 mm
+        // hole in the upper cap. The outline of its section, added up by hand from those
+        // dimensions: outer face 60, upper cap top 17, hole 1, upper cap underside 16, inner
+        // face 58, lower cap top 20, lower cap on the axis 1, bottom 21: 194 mm. The seams
+        // where the caps meet the wall (2 × 1 mm) are not drawn.
+        Body can = FieldMapExample.canArrangement().bodies().get(0);
+        double length = 0;
+        for (double[] e : FieldMapPicture.Outline.edges(can.crossSectionMetres())) {
+            length += Math.hypot(e[2] - e[0], e[3] - e[1]);
+        }
+        assertEquals(0.194, length, 1e-12);
     }
 
     @Test
