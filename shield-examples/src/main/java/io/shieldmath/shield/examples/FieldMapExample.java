@@ -76,17 +76,29 @@ public final class FieldMapExample {
         return List.of(files);
     }
 
-    /** The bench arrangement: a copper disc of 40 mm radius, 1 mm thick, midway between the coils. */
+    /**
+     * The bench arrangement: a copper disc of 40 mm radius, 1 mm thick, midway between the coils.
+     *
+     * @return the arrangement
+     */
     static Arrangement benchArrangement() {
         return Arrangement.of(Body.disc("copper plate", Catalogue.builtIn().get("copper-annealed"), mm(40), mm(1)));
     }
 
-    /** Two 15 mm coils of 20 turns, 30 mm apart (illustrative). */
+    /**
+     * Two 15 mm coils of 20 turns, 30 mm apart (illustrative).
+     *
+     * @return the coils
+     */
     static CoilPair benchCoils() {
         return CoilPair.coaxial(Coil.loop(mm(15), 20), Coil.loop(mm(15), 20), mm(30));
     }
 
-    /** The can: 80 % nickel–iron, 20 mm inner radius, 1 mm wall, 60 mm long, a 4 mm cable hole on top. */
+    /**
+     * The can: 80 % nickel–iron, 20 mm inner radius, 1 mm wall, 60 mm long, a 4 mm cable hole on top.
+     *
+     * @return the arrangement
+     */
     static Arrangement canArrangement() {
         return Arrangement.of(Body.can("Ni-Fe can", Catalogue.builtIn().get("nickel-iron-80"), mm(20), mm(1), mm(60))
                 .withCapHole(CanEnd.UPPER, mm(4)));

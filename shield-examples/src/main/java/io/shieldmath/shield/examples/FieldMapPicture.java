@@ -74,9 +74,9 @@ public final class FieldMapPicture {
     /** The most decades the colour scale spans. */
     static final double MAX_DECADES = 5;
 
-    private static final Color PAPER = new Color(0xF7F5F0);
-    private static final Color INK = new Color(0x23262B);
-    private static final Color QUIET_INK = new Color(0x5C6168);
+    private static final Color PAPER = Colours.PAPER;
+    private static final Color INK = Colours.INK;
+    private static final Color QUIET_INK = Colours.QUIET_INK;
     private static final Color HALO = new Color(255, 255, 255, 170);
     private static final String FONT = Font.SANS_SERIF;
 
@@ -280,10 +280,22 @@ public final class FieldMapPicture {
      */
     record Frame(double x0, double y0, double pxPerMetre, double rLeft, double zMax, int width, int height,
                  boolean mirrored) {
+        /**
+         * The pixel column of a radius.
+         *
+         * @param rMetres r in m; negative on the mirrored half
+         * @return x in pixels
+         */
         double x(double rMetres) {
             return x0 + (rMetres - rLeft) * pxPerMetre;
         }
 
+        /**
+         * The pixel row of an axial coordinate.
+         *
+         * @param zMetres z in m
+         * @return y in pixels
+         */
         double y(double zMetres) {
             return y0 + (zMax - zMetres) * pxPerMetre;
         }
@@ -294,7 +306,13 @@ public final class FieldMapPicture {
     private static final int BOTTOM = 62;
     private static final int RIGHT = 120;
 
-    /** The map's place on a canvas of the given size. */
+    /**
+     * The map's place on a canvas of the given size.
+     *
+     * @param width  the canvas width in pixels
+     * @param height the canvas height in pixels
+     * @return the frame
+     */
     Frame frame(int width, int height) {
         boolean mirrored = r[0] == 0;
         double rLeft = mirrored ? -r[r.length - 1] : r[0];
@@ -578,7 +596,12 @@ public final class FieldMapPicture {
         return (m < 1.5 ? 1 : m < 3.5 ? 2 : m < 7.5 ? 5 : 10) * p;
     }
 
-    /** The unit (in T) in which {@code tesla} reads from 1 to below 1000: T, mT, µT or nT. */
+    /**
+     * The unit in which a flux density reads from 1 to below 1000: T, mT, µT or nT.
+     *
+     * @param tesla the flux density in T
+     * @return the unit's size in T
+     */
     static double unitOf(double tesla) {
         if (tesla >= 1) {
             return 1;
@@ -589,6 +612,12 @@ public final class FieldMapPicture {
         return tesla >= 1e-6 ? 1e-6 : 1e-9;
     }
 
+    /**
+     * The symbol of a unit chosen by {@link #unitOf(double)}.
+     *
+     * @param unit the unit's size in T
+     * @return its symbol
+     */
     static String unitName(double unit) {
         return unit == 1 ? "T" : unit == 1e-3 ? "mT" : unit == 1e-6 ? "µT" : "nT";
     }
