@@ -578,7 +578,7 @@ public final class FieldMapPicture {
         g.drawString(title, LEFT, 22);
         g.setFont(new Font(FONT, Font.PLAIN, 11));
         g.setColor(QUIET_INK);
-        g.drawString("colour: |B| on a log scale;  thin lines: flux lines, equal flux between neighbours"
+        g.drawString("colour: |B| on a log scale;  thin lines: flux lines (contours of Re ψ), equal flux between neighbours"
                 + (fluxLines > 0 ? "" : " (none drawn)") + ";  thick lines: bodies", LEFT, 40);
     }
 

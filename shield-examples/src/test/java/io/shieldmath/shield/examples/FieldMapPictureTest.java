@@ -125,6 +125,13 @@ class FieldMapPictureTest {
             // within 2 L* (the map's grid interpolates between solver samples)
             assertEquals(Colours.lightness(expected), shown, 2.0, "at r " + at[0] + " m");
         }
+        // A map that does not start on the axis is drawn as it is, not mirrored.
+        FieldMapPicture offAxis = FieldMapPicture.of(can, s.fieldMap(Point.ofMillimetres(5, -40),
+                Point.ofMillimetres(40, 40), 36, 81, FieldMapExample.APPLIED));
+        FieldMapPicture.Frame f = offAxis.frame(600, 600);
+        assertTrue(!f.mirrored() && Math.abs(f.x(0.005) - f.x0()) < 1e-9);
+        offAxis.writePng(dir.resolve("off-axis.png"), 600, 600);
+        assertEquals(600, ImageIO.read(dir.resolve("off-axis.png").toFile()).getWidth());
     }
 
     @Test
