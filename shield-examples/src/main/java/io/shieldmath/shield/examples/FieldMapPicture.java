@@ -348,7 +348,7 @@ public final class FieldMapPicture {
         g.draw(new Rectangle2D.Double(f.x0(), f.y0(), f.width(), f.height()));
         paintAxes(g, f);
         paintColourBar(g, f);
-        paintTitle(g, f, width);
+        paintTitle(g);
     }
 
     /** The colour field at one image pixel per canvas pixel, bilinear in log10 |B|. */
@@ -572,7 +572,7 @@ public final class FieldMapPicture {
         g.drawString("peak, log scale", (float) x - 4, (float) y - 8);
     }
 
-    private void paintTitle(Graphics2D g, Frame f, int width) {
+    private void paintTitle(Graphics2D g) {
         g.setColor(INK);
         g.setFont(new Font(FONT, Font.BOLD, 15));
         g.drawString(title, LEFT, 22);
