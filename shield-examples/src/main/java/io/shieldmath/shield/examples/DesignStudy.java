@@ -63,6 +63,9 @@ public final class DesignStudy {
     static final double[] CAN_SIDES_M = {0.08, 0.06, 0.03};
     /** Below this frequency the transformer's field dominates, above it the charger's. */
     static final double SOURCE_SPLIT_HZ = 1000;
+    /** The SE chart's size in pixels. */
+    static final int CHART_WIDTH = 1000;
+    static final int CHART_HEIGHT = 680;
 
     private DesignStudy() {
     }
@@ -149,12 +152,17 @@ public final class DesignStudy {
                     .withTitle(best.kind() + ": " + best.name() + " (wall stack, source side first)");
             DesignFile.write(d, design);
         }
-        List<SeChart.Curve> curves = new ArrayList<>();
+        SeChart chart = SeChart.titled("Candidate shields for the magnetometer board (illustrative)")
+                .requiring(need)
+                .switchingSourceAt(Hz(SOURCE_SPLIT_HZ), "transformer at 30 cm", "charger at 6 cm");
         for (Evaluated e : results) {
-            curves.add(new SeChart.Curve(e.kind() + ": " + e.name(), sweepHz, e.sweepDb()));
+            chart = chart.plus(SeChart.Kind.valueOf(e.kind().toUpperCase(Locale.ROOT)), e.name(), sweepHz, e.sweepDb());
         }
-        SeChart.write(folder.resolve("se-vs-frequency.png"), folder.resolve("se-vs-frequency.svg"),
-                "Candidate shields for the magnetometer board (illustrative)", curves, requirementSegments(need));
+        if (best != null) {
+            chart = chart.recommending(SeChart.Kind.valueOf(best.kind().toUpperCase(Locale.ROOT)), best.name());
+        }
+        chart.writePng(folder.resolve("se-vs-frequency.png"), CHART_WIDTH, CHART_HEIGHT);
+        chart.writeSvg(folder.resolve("se-vs-frequency.svg"), CHART_WIDTH, CHART_HEIGHT);
         out.println();
         out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, chosen-design.json, "
                 + "se-vs-frequency.png, se-vs-frequency.svg");
@@ -322,21 +330,5 @@ public final class DesignStudy {
             s.append('\n');
         }
         Files.writeString(file, s, StandardCharsets.UTF_8);
-    }
-
-    private static List<SeChart.Curve> requirementSegments(Requirement need) {
-        List<SeChart.Curve> segments = new ArrayList<>();
-        for (Requirement.Entry e : need.entries()) {
-            double lo = e.band().low().toHertz();
-            double hi = e.band().high().toHertz();
-            // widen each band on the plot so that it can be seen: a quarter of a decade at least
-            double mid = Math.sqrt(lo * hi);
-            lo = Math.min(lo, mid / 1.33);
-            hi = Math.max(hi, mid * 1.33);
-            segments.add(new SeChart.Curve(segments.isEmpty() ? "required SE per band" : "required, " + e.band(),
-                    new double[] {lo, hi},
-                    new double[] {e.requiredDb(), e.requiredDb()}));
-        }
-        return segments;
     }
 }
