@@ -7,6 +7,7 @@ import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.StackAccess;
 import io.shieldmath.shield.internal.StackArrays;
 import io.shieldmath.shield.quantity.SheetResistance;
 import java.util.ArrayList;
@@ -31,8 +32,13 @@ public final class Barrier {
     /** The largest number of layers in one barrier. */
     public static final int MAX_LAYERS = 256;
 
+    static {
+        // Lets the coil-coupling model read the arrays below without a public accessor.
+        StackAccess.registerBarrier(b -> ((Barrier) b).stack);
+    }
+
     private final List<Layer> layers;
-    /** Primitive copies for the hot path, indexed like the layers. */
+    /** Primitive copies for the hot path, indexed like the layers (also read through {@code StackAccess}). */
     final StackArrays stack;
 
     private Barrier(List<Layer> layers) {
