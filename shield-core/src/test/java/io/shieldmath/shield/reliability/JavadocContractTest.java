@@ -12,6 +12,7 @@ import com.sun.source.doctree.ReferenceTree;
 import com.sun.source.doctree.ValueTree;
 import com.sun.source.tree.ClassTree;
 import com.sun.source.tree.CompilationUnitTree;
+import com.sun.source.tree.ExpressionTree;
 import com.sun.source.tree.IdentifierTree;
 import com.sun.source.tree.ImportTree;
 import com.sun.source.tree.MemberSelectTree;
@@ -112,7 +113,13 @@ class JavadocContractTest {
             Map.entry("io.shieldmath.shield.materials.files.DesignShell.inUniformField(boolean)",
                     "the constructor's checks do not depend on the field flag, and this shell passed them"),
             Map.entry("io.shieldmath.shield.cli.BatchCommand.main(String[])",
-                    "reports every failure as a message and an exit code"));
+                    "reports every failure as a message and an exit code"),
+            Map.entry("io.shieldmath.shield.enclosure.SaturationCheck.warnings()",
+                    "asks suggestedMinimumThickness(w) only for the walls w it has"),
+            Map.entry("io.shieldmath.shield.materials.files.DesignLayer.toString()",
+                    "calls the getter medium(), not the refusing factory medium(Medium, Length) of the same name"),
+            Map.entry("io.shieldmath.shield.axisymmetric.SaturationStudy.of(AxialFieldShielding)",
+                    "builds the scene the evaluation has built already (its bodies and sensor region, no coils)"));
 
     private static final Pattern EXPORTS = Pattern.compile("(?m)^\\s*exports\\s+([\\w.]+)\\s*(to\\b)?");
 
@@ -120,7 +127,14 @@ class JavadocContractTest {
     private record TypeInfo(String pkg, boolean isPublic, boolean exported) {
     }
 
+    /** A type of this repository with the file it is declared in. */
+    private record Declared(CompilationUnitTree unit, ClassTree tree, String name, String pkg) {
+    }
+
     private final Map<String, TypeInfo> types = new HashMap<>();
+    private final Map<String, Declared> declared = new HashMap<>();
+    /** For each type of the repository, the names of its methods that refuse ("<init>" for constructors). */
+    private final Map<String, Set<String>> refusing = new HashMap<>();
     private final Set<String> exportedPackages = new HashSet<>();
     private final List<CompilationUnitTree> units = new ArrayList<>();
     private final Set<String> allowedSeen = new HashSet<>();
@@ -150,8 +164,17 @@ class JavadocContractTest {
         Files.writeString(src.resolve("demo/hidden/Engine.java"),
                 "package demo.hidden;\n/** Hidden. */\npublic final class Engine {\n"
                         + "    /** N. */\n    public static final int N = 3;\n}\n");
-        Files.writeString(src.resolve("demo/api/Helper.java"),
-                "package demo.api;\nfinal class Helper {\n}\n");
+        Files.writeString(src.resolve("demo/api/Helper.java"), String.join("\n",
+                "package demo.api;",
+                "final class Helper {",
+                "    static int make(int n) {",
+                "        if (n < 1) {",
+                "            throw new IllegalArgumentException(\"n\");",
+                "        }",
+                "        return n;",
+                "    }",
+                "}",
+                ""));
         Files.writeString(src.resolve("demo/api/Widget.java"), String.join("\n",
                 "package demo.api;",
                 "import demo.hidden.Engine;",
@@ -181,8 +204,9 @@ class JavadocContractTest {
                 "        Require.nonNull(\"s\", s);",
                 "        return this;",
                 "    }",
-                "    /** Points at {@link Helper}. @return w */",
-                "    public Widget helped() {",
+                "    /** Points at {@link Helper}; refuses through it. @param n n @return w */",
+                "    public Widget helped(int n) {",
+                "        Helper.make(n);",
                 "        return this;",
                 "    }",
                 "}",
@@ -190,10 +214,11 @@ class JavadocContractTest {
         JavadocContractTest scan = new JavadocContractTest();
         List<String> problems = scan.scan(root);
         assertEquals(List.of(
+                "no @throws: demo.api.Widget.helped(int)",
                 "no @throws: demo.api.Widget.of(double)",
                 "no @throws: demo.api.Widget.scaled(double)",
                 "link out of the published API: demo.api.Widget -> Engine (package not exported)",
-                "link out of the published API: demo.api.Widget.helped() -> Helper (not public)"), problems);
+                "link out of the published API: demo.api.Widget.helped(int) -> Helper (not public)"), problems);
         assertEquals(5, scan.methods);
     }
 
@@ -221,6 +246,7 @@ class JavadocContractTest {
         for (CompilationUnitTree unit : units) {
             index(unit);
         }
+        findRefusingMethods();
         Set<String> missingThrows = new TreeSet<>();
         Set<String> hiddenLinks = new TreeSet<>();
         for (CompilationUnitTree unit : units) {
@@ -268,16 +294,20 @@ class JavadocContractTest {
         boolean exported = exportedPackages.contains(pkg);
         for (Tree t : unit.getTypeDecls()) {
             if (t instanceof ClassTree c) {
-                indexType(c, pkg, pkg + "." + c.getSimpleName(), isPublic(c, false), exported);
+                indexType(unit, c, pkg, pkg + "." + c.getSimpleName(), isPublic(c, false), exported);
             }
         }
     }
 
-    private void indexType(ClassTree c, String pkg, String name, boolean visible, boolean exported) {
+    private void indexType(CompilationUnitTree unit, ClassTree c, String pkg, String name, boolean visible,
+                           boolean exported) {
         types.put(name, new TypeInfo(pkg, visible, exported));
+        declared.put(name, new Declared(unit, c, name, pkg));
+        refusing.put(name, new HashSet<>());
         for (Tree m : c.getMembers()) {
             if (m instanceof ClassTree n) {
-                indexType(n, pkg, name + "." + n.getSimpleName(), visible && isPublic(n, isInterface(c)), exported);
+                indexType(unit, n, pkg, name + "." + n.getSimpleName(), visible && isPublic(n, isInterface(c)),
+                        exported);
             }
         }
     }
@@ -296,13 +326,7 @@ class JavadocContractTest {
                           Set<String> hiddenLinks) {
         boolean iface = isInterface(type);
         checkLinks(unit, type, type, name, hiddenLinks);
-        Map<String, List<MethodTree>> byName = new HashMap<>();
-        for (Tree m : type.getMembers()) {
-            if (m instanceof MethodTree mt) {
-                byName.computeIfAbsent(mt.getName().toString(), k -> new ArrayList<>()).add(mt);
-            }
-        }
-        Set<String> refusing = refusingMethodNames(type, byName);
+        Declared here = declared.get(name);
         int count = 0;
         for (Tree m : type.getMembers()) {
             if (m instanceof ClassTree nested && isPublic(nested, iface)) {
@@ -321,7 +345,7 @@ class JavadocContractTest {
                 }
                 if (CANNOT_REFUSE.containsKey(label)) {
                     allowedSeen.add(label);
-                } else if (mt.getBody() != null && refuses(mt, type, refusing) && !hasThrowsTag(doc)) {
+                } else if (mt.getBody() != null && refuses(mt, here) && !hasThrowsTag(doc)) {
                     missingThrows.add(label);
                 }
             }
@@ -344,31 +368,43 @@ class JavadocContractTest {
                 .anyMatch(t -> t.getKind() == DocTree.Kind.THROWS || t.getKind() == DocTree.Kind.EXCEPTION);
     }
 
-    /** The names of this type's methods that refuse directly or through others of its methods (a fixed point). */
-    private static Set<String> refusingMethodNames(ClassTree type, Map<String, List<MethodTree>> byName) {
-        Set<String> refusing = new HashSet<>();
+    /**
+     * Fills {@link #refusing}: a method refuses if its body does (see {@link #refuses}); calls
+     * are followed through every type of the repository, to a fixed point.
+     */
+    private void findRefusingMethods() {
         boolean grew = true;
         while (grew) {
             grew = false;
-            for (Map.Entry<String, List<MethodTree>> e : byName.entrySet()) {
-                if (refusing.contains(e.getKey())) {
-                    continue;
-                }
-                for (MethodTree mt : e.getValue()) {
-                    if (mt.getBody() != null && refuses(mt, type, refusing)) {
-                        refusing.add(e.getKey());
+            for (Declared d : declared.values()) {
+                Set<String> names = refusing.get(d.name());
+                for (Tree m : d.tree().getMembers()) {
+                    if (m instanceof MethodTree mt && mt.getBody() != null
+                            && !names.contains(mt.getName().toString()) && refuses(mt, d)) {
+                        names.add(mt.getName().toString());
                         grew = true;
-                        break;
                     }
                 }
             }
         }
-        return refusing;
     }
 
-    /** Whether the body throws, checks with Require, or calls a refusing method of its own class by name. */
-    private static boolean refuses(MethodTree mt, ClassTree owner, Set<String> refusingNames) {
+    /**
+     * Whether the body refuses: it throws (other than {@code AssertionError}), calls a check of
+     * {@code Require} other than those in {@link #NOT_REFUSALS}, or calls a refusing method or
+     * constructor of a type of this repository that the call names (a method of its own or an
+     * enclosing class, a static import, or {@code Type.method}, {@code new Type}); methods are
+     * matched by name, so one refusing overload makes every overload count. A call into
+     * another type counts only if an argument uses one of this method's parameters (a getter
+     * that turns a checked field into a quantity cannot refuse). Calls on objects
+     * ({@code barrier.facing(...)}) are not followed: their type is not known without compiling.
+     */
+    private boolean refuses(MethodTree mt, Declared owner) {
         boolean[] found = {false};
+        Set<String> params = new HashSet<>();
+        mt.getParameters().forEach(v -> params.add(v.getName().toString()));
+        Map<String, String> imports = imports(owner.unit());
+        Map<String, String> staticImports = staticImports(owner.unit());
         new TreeScanner<Void, Void>() {
             @Override
             public Void visitThrow(ThrowTree node, Void p) {
@@ -381,8 +417,9 @@ class JavadocContractTest {
 
             @Override
             public Void visitNewClass(NewClassTree node, Void p) {
-                String created = node.getIdentifier().toString();
-                if (created.equals(owner.getSimpleName().toString()) && refusingNames.contains("<init>")) {
+                String type = typeNamed(node.getIdentifier().toString());
+                if (node.getClassBody() == null && (owner.name().equals(type) || passesInput(node.getArguments()))
+                        && refuses(type, "<init>")) {
                     found[0] = true;
                 }
                 return super.visitNewClass(node, p);
@@ -394,15 +431,26 @@ class JavadocContractTest {
                 if (select instanceof MemberSelectTree ms) {
                     String target = ms.getExpression().toString();
                     String called = ms.getIdentifier().toString();
-                    boolean require = target.equals("Require") || target.endsWith(".Require");
-                    if (require && !NOT_REFUSALS.contains(called)
-                            || target.equals("this") && refusingNames.contains(called)) {
+                    String type = target.equals("this") ? owner.name() : typeNamed(target);
+                    if (type != null && type.endsWith(".internal.Require")) {
+                        found[0] |= !NOT_REFUSALS.contains(called);
+                    } else if ((owner.name().equals(type) || passesInput(node.getArguments())) && refuses(type, called)) {
                         found[0] = true;
                     }
                 } else if (select instanceof IdentifierTree id) {
                     String called = id.getName().toString();
-                    if (refusingNames.contains(called) || called.equals("this") && refusingNames.contains("<init>")) {
-                        found[0] = true;
+                    if (called.equals("this")) {
+                        found[0] |= refuses(owner.name(), "<init>");
+                    } else {
+                        for (String t = owner.name(); t.length() > owner.pkg().length(); t = t.substring(0, t.lastIndexOf('.'))) {
+                            found[0] |= refuses(t, called);
+                        }
+                        if (passesInput(node.getArguments())) {
+                            found[0] |= refuses(staticImports.get(called), called);
+                            for (String t : staticImports.getOrDefault("*", "").split(",")) {
+                                found[0] |= refuses(t, called);
+                            }
+                        }
                     }
                 }
                 return super.visitMethodInvocation(node, p);
@@ -412,8 +460,70 @@ class JavadocContractTest {
             public Void visitClass(ClassTree node, Void p) {
                 return null; // a nested or anonymous class's code runs later, not in this call
             }
+
+            /**
+             * Whether a call into another type is handed this method's input: a value the
+             * object holds was checked when it was made, so a call on it alone does not refuse.
+             */
+            private boolean passesInput(List<? extends ExpressionTree> arguments) {
+                boolean[] uses = {false};
+                for (ExpressionTree a : arguments) {
+                    new TreeScanner<Void, Void>() {
+                        @Override
+                        public Void visitIdentifier(IdentifierTree node, Void p) {
+                            uses[0] |= params.contains(node.getName().toString());
+                            return null;
+                        }
+                    }.scan(a, null);
+                }
+                return uses[0];
+            }
+
+            private String typeNamed(String name) {
+                return resolveType(name, imports, owner);
+            }
         }.scan(mt.getBody(), null);
         return found[0];
+    }
+
+    private boolean refuses(String type, String method) {
+        return type != null && refusing.containsKey(type) && refusing.get(type).contains(method);
+    }
+
+    /** The repository type a name in code means in {@code owner}'s file, or null. */
+    private String resolveType(String name, Map<String, String> imports, Declared owner) {
+        if (types.containsKey(name)) {
+            return name;
+        }
+        String first = name.contains(".") ? name.substring(0, name.indexOf('.')) : name;
+        String rest = name.substring(first.length());
+        for (String t = owner.name(); t.length() > owner.pkg().length(); t = t.substring(0, t.lastIndexOf('.'))) {
+            if (types.containsKey(t + "." + name)) {
+                return t + "." + name;
+            }
+        }
+        if (imports.containsKey(first) && types.containsKey(imports.get(first) + rest)) {
+            return imports.get(first) + rest;
+        }
+        String samePackage = owner.pkg() + "." + name;
+        return types.containsKey(samePackage) ? samePackage : null;
+    }
+
+    /**
+     * Simple member name to its type, for {@code import static a.b.Type.member;}; under
+     * {@code "*"} the types of {@code import static a.b.Type.*;}, comma-separated.
+     */
+    private static Map<String, String> staticImports(CompilationUnitTree unit) {
+        Map<String, String> m = new HashMap<>();
+        for (ImportTree i : unit.getImports()) {
+            if (i.isStatic()) {
+                String q = i.getQualifiedIdentifier().toString();
+                String member = q.substring(q.lastIndexOf('.') + 1);
+                String type = q.substring(0, q.lastIndexOf('.'));
+                m.merge(member, type, (a, b) -> a + "," + b);
+            }
+        }
+        return m;
     }
 
     /** Flags references in the doc comment of {@code member} to types the published javadoc does not show. */
