@@ -72,7 +72,8 @@ import org.junit.jupiter.api.io.TempDir;
  *   <li>No javadoc of an exported type points a reader to what the published javadoc does
  *       not show: a {@code {@link}}, {@code {@linkplain}} or {@code @see} to a type that is
  *       not public, or that lives in a package the module does not export to everyone
- *       ({@code {@value}} is allowed: it prints the constant, not a link).</li>
+ *       ({@code {@value}} is allowed: it prints the constant, not a link), or to a member of
+ *       its own type that is not public.</li>
  * </ol>
  *
  * <p>The first check follows calls within one class only (a call into another class that
@@ -199,10 +200,12 @@ class JavadocContractTest {
                 "        Require.inRange(\"k\", k, 0, 1, \"\");",
                 "        return this;",
                 "    }",
-                "    /** Only a null check, said by its param. @param s s, not null @return w */",
+                "    /** Only a null check, said by its param; see {@link #secret()}. @param s s, not null @return w */",
                 "    public Widget named(String s) {",
                 "        Require.nonNull(\"s\", s);",
                 "        return this;",
+                "    }",
+                "    private void secret() {",
                 "    }",
                 "    /** Points at {@link Helper}; refuses through it. @param n n @return w */",
                 "    public Widget helped(int n) {",
@@ -218,7 +221,8 @@ class JavadocContractTest {
                 "no @throws: demo.api.Widget.of(double)",
                 "no @throws: demo.api.Widget.scaled(double)",
                 "link out of the published API: demo.api.Widget -> Engine (package not exported)",
-                "link out of the published API: demo.api.Widget.helped(int) -> Helper (not public)"), problems);
+                "link out of the published API: demo.api.Widget.helped(int) -> Helper (not public)",
+                "link out of the published API: demo.api.Widget.named(String) -> #secret() (not public)"), problems);
         assertEquals(5, scan.methods);
     }
 
@@ -552,6 +556,10 @@ class JavadocContractTest {
         for (String ref : refs) {
             String typePart = ref.contains("#") ? ref.substring(0, ref.indexOf('#')) : ref;
             if (typePart.isEmpty()) {
+                String memberName = ref.substring(1).replaceAll("\\(.*", "");
+                if (hiddenMember(owner, memberName)) {
+                    hiddenLinks.add(label + " -> " + ref + " (not public)");
+                }
                 continue;
             }
             String resolved = resolve(typePart, imports, pkg, owner);
@@ -560,6 +568,35 @@ class JavadocContractTest {
                 hiddenLinks.add(label + " -> " + ref + " (" + (info.isPublic() ? "package not exported" : "not public") + ")");
             }
         }
+    }
+
+    /** Whether {@code owner} declares members named {@code name} and none of them is visible to users. */
+    private static boolean hiddenMember(ClassTree owner, String name) {
+        boolean iface = isInterface(owner);
+        boolean any = false;
+        for (Tree m : owner.getMembers()) {
+            Set<Modifier> flags;
+            String n;
+            if (m instanceof MethodTree mt) {
+                flags = mt.getModifiers().getFlags();
+                n = mt.getName().contentEquals("<init>") ? owner.getSimpleName().toString() : mt.getName().toString();
+            } else if (m instanceof VariableTree v) {
+                flags = v.getModifiers().getFlags();
+                n = v.getName().toString();
+                if (owner.getKind() == Tree.Kind.ENUM && flags.isEmpty()) {
+                    continue; // an enum constant
+                }
+            } else {
+                continue;
+            }
+            if (n.equals(name)) {
+                if (isVisible(flags, iface) || owner.getKind() == Tree.Kind.RECORD) {
+                    return false;
+                }
+                any = true;
+            }
+        }
+        return any;
     }
 
     private static Map<String, String> imports(CompilationUnitTree unit) {
