@@ -253,6 +253,7 @@ public final class Body {
      *
      * @param distance the distance, not null, at most 100 m
      * @return the moved body; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the distance is negative or above 100 m
      */
     public Body shiftedBy(Length distance) {
         double d = Require.inRange("shift of '" + name + "'", Require.nonNull("distance", distance).toMetres(), 0, MAX, "m");
@@ -264,6 +265,7 @@ public final class Body {
      *
      * @param distance the distance, not null, at most 100 m
      * @return the moved body; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the distance is negative or above 100 m
      */
     public Body shiftedBackBy(Length distance) {
         double d = Require.inRange("shift of '" + name + "'", Require.nonNull("distance", distance).toMetres(), 0, MAX, "m");

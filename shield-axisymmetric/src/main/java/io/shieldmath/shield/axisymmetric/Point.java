@@ -71,6 +71,7 @@ public record Point(double radiusMetres, double axialMetres) {
      *
      * @param z the axial coordinate, not null
      * @return the point
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if z is outside −1000 m to 1000 m
      */
     public static Point onAxis(Length z) {
         return new Point(0, Require.nonNull("axial coordinate", z).toMetres());

@@ -29,7 +29,7 @@ import java.util.List;
  * study.sweep(amperesPerMetre(1), amperesPerMetre(10_000), 13).onset();  // the body and the field at which it saturates
  * }</pre>
  *
- * <p>Method ({@link SaturableSolve}): static fields by Newton's method on the convex
+ * <p>Method: static fields by Newton's method on the convex
  * magnetic energy with a line search (Silvester &amp; Chari 1970), converged to a relative
  * nodal update of {@value #NEWTON_TOLERANCE}; alternating fields by the effective-permeability
  * (first-harmonic) approximation, the secant permeability at each point's peak flux density

@@ -65,6 +65,7 @@ public final class SensorRegion {
      *
      * @param distance the distance, not null, at most 100 m
      * @return the moved region; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the distance is negative or above 100 m
      */
     public SensorRegion shiftedBy(Length distance) {
         return new SensorRegion(radius, length,
@@ -76,6 +77,7 @@ public final class SensorRegion {
      *
      * @param distance the distance, not null, at most 100 m
      * @return the moved region; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the distance is negative or above 100 m
      */
     public SensorRegion shiftedBackBy(Length distance) {
         return new SensorRegion(radius, length,

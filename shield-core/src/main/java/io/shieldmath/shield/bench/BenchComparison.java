@@ -64,6 +64,7 @@ public final class BenchComparison {
      * @param withPlate    the receive voltage with the plate in place, not null
      * @param modelDb      the model's insertion loss in dB, finite
      * @return the comparison, with a model tolerance of 0 dB
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if {@code modelDb} is NaN or infinite
      */
     public static BenchComparison of(VoltageReading withoutPlate, VoltageReading withPlate, double modelDb) {
         return new BenchComparison(Require.nonNull("reading without plate", withoutPlate),
@@ -78,6 +79,7 @@ public final class BenchComparison {
      *
      * @param db the tolerance in dB, 0 or more
      * @return the new comparison; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if {@code db} is negative, NaN or infinite
      */
     public BenchComparison withModelToleranceDb(double db) {
         return new BenchComparison(without, with, modelDb, Require.nonNegative("model tolerance", db, "dB"));

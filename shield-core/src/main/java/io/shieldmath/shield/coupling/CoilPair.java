@@ -96,6 +96,7 @@ public final class CoilPair {
      * @return the pair
      * @throws IllegalArgumentException if the windings come closer than {@value #MIN_GAP_RATIO}
      *                                  times the largest ring radius
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the separation is negative or above 1000 m
      */
     public static CoilPair coaxial(Coil transmitter, Coil receiver, Length separation) {
         Require.nonNull("transmitter", transmitter);

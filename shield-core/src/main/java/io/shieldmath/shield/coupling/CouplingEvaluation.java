@@ -8,15 +8,14 @@ import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.planar.Barrier;
-import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.internal.SpectralChain;
+import io.shieldmath.shield.internal.StackAccess;
 import io.shieldmath.shield.internal.StackArrays;
-import java.util.List;
 
 /**
  * A coil pair with an infinite planar barrier between the coils, evaluated exactly in the
@@ -63,9 +62,8 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
     CouplingEvaluation(CoilPair pair, Barrier barrier) {
         this.pair = pair;
         this.barrier = barrier;
-        List<Layer> layers = barrier.layers();
-        stack = StackArrays.of("layer", layers.size(), i -> layers.get(i).medium(),
-                i -> layers.get(i).thickness().toMetres(), i -> layers.get(i).isGap());
+        // The arrays the barrier already holds (one copy per barrier, checked once).
+        stack = StackAccess.ofBarrier(barrier);
         planar = barrier.facing(IncidentField.magneticNearField(Length.ofMetres(pair.separationMetres()),
                 ImpedanceForm.TEXTBOOK));
     }

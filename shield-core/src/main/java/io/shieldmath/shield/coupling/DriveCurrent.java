@@ -77,6 +77,8 @@ public final class DriveCurrent {
      * @param measure      how the amplitude is stated, not null
      * @param frequency    the frequency, not null
      * @return the current
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the amplitude is not greater than 0 or above
+     *         the equivalent of 1e6 A peak
      */
     public static DriveCurrent ofMilliamperes(double milliamperes, AmplitudeMeasure measure, Frequency frequency) {
         return ofAmperes(milliamperes * 1e-3, measure, frequency);

@@ -75,6 +75,7 @@ public final class ToleranceResult {
      *
      * @param percent the percentile, from 0 to 100
      * @return the SE below which {@code percent} % of the samples lie, dB
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if {@code percent} is outside 0 to 100
      */
     public double percentileDb(double percent) {
         Require.inRange("percentile", percent, 0, 100, "%");

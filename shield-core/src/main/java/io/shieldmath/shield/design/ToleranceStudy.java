@@ -104,6 +104,7 @@ public final class ToleranceStudy {
      * @param relative the relative tolerance, from 0 to 1
      * @param shape    its spread, not null
      * @return the new study
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if {@code relative} is outside 0 to 1
      */
     public ToleranceStudy thickness(double relative, Spread shape) {
         return with(0, "thickness tolerance", relative, shape);
@@ -115,6 +116,7 @@ public final class ToleranceStudy {
      * @param relative the relative tolerance, from 0 to 1
      * @param shape    its spread, not null
      * @return the new study
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if {@code relative} is outside 0 to 1
      */
     public ToleranceStudy conductivity(double relative, Spread shape) {
         return with(1, "conductivity tolerance", relative, shape);
@@ -126,6 +128,7 @@ public final class ToleranceStudy {
      * @param relative the relative tolerance, from 0 to 1
      * @param shape    its spread, not null
      * @return the new study
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if {@code relative} is outside 0 to 1
      */
     public ToleranceStudy permeability(double relative, Spread shape) {
         return with(2, "permeability tolerance", relative, shape);
@@ -137,6 +140,7 @@ public final class ToleranceStudy {
      * @param relative the relative tolerance, from 0 to 1
      * @param shape    its spread, not null
      * @return the new study
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if {@code relative} is outside 0 to 1
      */
     public ToleranceStudy distance(double relative, Spread shape) {
         return with(3, "distance tolerance", relative, shape);
@@ -251,6 +255,8 @@ public final class ToleranceStudy {
          * Runs the study.
          *
          * @return the distribution of SE
+         * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the frequency is outside the planar model's band,
+         *         1 µHz to 10 THz
          */
         public ToleranceResult run() {
             return study.run(frequency, target.toDb(), samples, seed, listener);

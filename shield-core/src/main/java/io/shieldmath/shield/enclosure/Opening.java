@@ -96,6 +96,7 @@ public final class Opening {
      *
      * @param diameter the diameter, from 1 µm to 100 m
      * @return the opening
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the diameter is outside 1 µm to 100 m
      */
     public static Opening hole(Length diameter) {
         return new Opening(Kind.HOLE, size("hole diameter", diameter), diameter, 1, null, null, "hole " + diameter);
@@ -107,6 +108,8 @@ public final class Opening {
      * @param diameter the diameter of each hole, from 1 µm to 100 m
      * @param count    the number of holes, 1 to 10⁹
      * @return the opening
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the diameter is outside 1 µm to 100 m or the count
+     *         outside 1 to 10⁹
      */
     public static Opening holes(Length diameter, int count) {
         size("hole diameter", diameter);
@@ -136,6 +139,7 @@ public final class Opening {
      *
      * @param length the unfastened length, from 1 µm to 100 m
      * @return the opening
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the length is outside 1 µm to 100 m
      */
     public static Opening seam(Length length) {
         size("seam length", length);
@@ -165,6 +169,7 @@ public final class Opening {
      *
      * @param distance the distance, from 1 µm to 100 m
      * @return the new opening; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the distance is outside 1 µm to 100 m
      */
     public Opening atDistance(Length distance) {
         return new Opening(kind, length, width, count, tubeDepth, size("victim distance", distance), name);

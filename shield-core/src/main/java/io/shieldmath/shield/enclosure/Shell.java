@@ -175,6 +175,7 @@ public final class Shell implements ShieldingModel<ShellResult> {
      *
      * @param gap the gap, from 1 pm to 100 m
      * @return the new shell
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the gap is outside 1 pm to 100 m
      */
     public Shell thenGap(Length gap) {
         List<Layer> l = new ArrayList<>(layers);

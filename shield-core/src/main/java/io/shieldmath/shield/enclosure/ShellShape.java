@@ -99,6 +99,8 @@ public final class ShellShape {
      * @param medium    the wall's medium or catalogue material, not null
      * @param thickness the wall thickness, from 1 pm to 100 m
      * @return the shell
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m or the conductivity
+     *         is above 1e10 S/m
      */
     public Shell wall(MediumSource medium, Length thickness) {
         return Shell.start(this, medium, thickness);

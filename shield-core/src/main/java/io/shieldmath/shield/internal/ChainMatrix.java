@@ -24,11 +24,16 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * {@link Numerics#RESCALE_ABOVE}), so any number of layers stays finite.
  *
  * <p>{@link SpectralChain} runs the same per-layer step (scaled layer matrix, product,
- * rescale) for the spectral waves of the coil-coupling model, with its own impedances; the
- * two are kept as separate loops because each is the hot path of its model and the step
- * keeps its eight running entries in local variables (sharing it would need an array or an
- * object per evaluation). Change one, change the other: both are tested against the same
- * arbitrary-precision reference product.
+ * rescale) for the spectral waves of the coil-coupling model, with its own impedances. The
+ * two are kept as separate loops, by measurement (JMH {@code LayerStepBenchmark} in
+ * {@code benchmarks}, 2026-12-03, on a 2-core machine shared with other builds): the step
+ * shared as one static method that keeps the running product in a {@code double[8]}
+ * allocated 80 bytes per evaluation when the array was made per call (escape analysis did
+ * not remove it), which would break the no-allocation promise of the single-point and batch
+ * calls unless every caller handed a scratch array down; the time ratios, shared over
+ * inline, were 0.96 ± 0.20 (planar, 5 layers) and 1.85 ± 0.51 (spectral sum, 5 layers) in
+ * one run and within noise in a re-run, so no gain was seen to pay for that. Change one,
+ * change the other: both are tested against the same arbitrary-precision reference product.
  *
  * <p>Speed (measured by the JMH benchmarks in {@code benchmarks}): per layer two square
  * roots, one sine and cosine, one exponential and three divisions. {@link Math#expm1} is

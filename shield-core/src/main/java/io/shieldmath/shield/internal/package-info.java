@@ -4,8 +4,9 @@
 
 /**
  * What the library's packages share and users do not see: the argument checks, the one
- * text grammar of quantities, the numeric constants and kernels, and the primitive layer
- * arrays of a stack. Not exported, except to this library's own modules; nothing here is
+ * text grammar of quantities, the numeric constants and kernels, the primitive layer
+ * arrays of a stack and the accessor through which other packages read a barrier's arrays
+ * ({@link io.shieldmath.shield.internal.StackAccess}). Not exported, except to this library's own modules; nothing here is
  * API and any of it may change in any release.
  *
  * <p>Dependencies: this package uses only {@code quantity}'s {@code Unit} and

@@ -334,6 +334,7 @@ public final class MagnetizationCurve {
      *
      * @param fluxDensity B, 0 or more, not null
      * @return µr, greater than 0
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if B is negative
      */
     public double secantPermeability(MagneticFluxDensity fluxDensity) {
         double x = Require.nonNegative("flux density", Require.nonNull("flux density", fluxDensity).toTesla(), "T");

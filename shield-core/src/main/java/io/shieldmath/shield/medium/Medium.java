@@ -75,6 +75,8 @@ public final class Medium implements MediumSource {
      * @param conductivity σ, not null
      * @param mu           µr, finite and greater than 0
      * @return the medium
+     * @throws IllegalArgumentException if the name is blank
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µr is not finite and greater than 0
      */
     public static Medium conductor(String name, Conductivity conductivity, double mu) {
         return of(name, conductivity, PermeabilityModel.constant(mu), RelativePermittivity.ONE);
@@ -87,6 +89,7 @@ public final class Medium implements MediumSource {
      * @param conductivity σ, not null
      * @param permeability the permeability model, not null
      * @return the medium
+     * @throws IllegalArgumentException if the name is blank
      */
     public static Medium conductor(String name, Conductivity conductivity, PermeabilityModel permeability) {
         return of(name, conductivity, permeability, RelativePermittivity.ONE);
@@ -98,6 +101,8 @@ public final class Medium implements MediumSource {
      * @param name    a name for reports, not blank
      * @param epsilon εr, finite and 1 or more
      * @return the medium
+     * @throws IllegalArgumentException if the name is blank
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if εr is NaN or out of range
      */
     public static Medium dielectric(String name, double epsilon) {
         return of(name, Conductivity.ZERO, ConstantPermeability.ONE, RelativePermittivity.of(epsilon));
@@ -170,6 +175,7 @@ public final class Medium implements MediumSource {
      *
      * @param newName the name, not blank
      * @return the renamed medium; this one is unchanged
+     * @throws IllegalArgumentException if the name is blank
      */
     public Medium withName(String newName) {
         return of(newName, conductivity, permeability, permittivity);

@@ -45,6 +45,9 @@ public interface PermeabilityModel {
      *
      * @param frequency the frequency, not null
      * @return µr at that frequency
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the model returns µ' or µ'' out of the range of
+     *         {@link io.shieldmath.shield.quantity.RelativePermeability} (a model that breaks the contract of
+     *         {@link #real(double)} and {@link #loss(double)})
      */
     default RelativePermeability at(Frequency frequency) {
         double f = Require.nonNull("frequency", frequency).toHertz();

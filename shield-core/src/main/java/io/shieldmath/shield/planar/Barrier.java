@@ -7,6 +7,7 @@ import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.MediumSource;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.StackAccess;
 import io.shieldmath.shield.internal.StackArrays;
 import io.shieldmath.shield.quantity.SheetResistance;
 import java.util.ArrayList;
@@ -31,8 +32,13 @@ public final class Barrier {
     /** The largest number of layers in one barrier. */
     public static final int MAX_LAYERS = 256;
 
+    static {
+        // Lets the coil-coupling model read the arrays below without a public accessor.
+        StackAccess.registerBarrier(b -> ((Barrier) b).stack);
+    }
+
     private final List<Layer> layers;
-    /** Primitive copies for the hot path, indexed like the layers. */
+    /** Primitive copies for the hot path, indexed like the layers (also read through {@code StackAccess}). */
     final StackArrays stack;
 
     private Barrier(List<Layer> layers) {
@@ -63,6 +69,8 @@ public final class Barrier {
      * @param medium    the medium or catalogue material, not null
      * @param thickness its thickness, from 1 pm to 100 m
      * @return the barrier
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m or the
+     *         conductivity is above 1e10 S/m
      */
     public static Barrier of(MediumSource medium, Length thickness) {
         return of(Layer.of(medium, thickness));
@@ -75,6 +83,7 @@ public final class Barrier {
      * @return the barrier
      * @throws IllegalArgumentException if there are no layers or more than {@value #MAX_LAYERS}
      * @throws NullPointerException if the array or a layer is null (the message names the layer's number)
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a layer's conductivity is above 1e10 S/m
      */
     public static Barrier of(Layer... layers) {
         return new Barrier(checked(java.util.Arrays.asList(Require.nonNull("layers", layers))));
@@ -87,6 +96,7 @@ public final class Barrier {
      * @return the barrier
      * @throws IllegalArgumentException if there are no layers or more than {@value #MAX_LAYERS}
      * @throws NullPointerException if the list or a layer is null (the message names the layer's number)
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a layer's conductivity is above 1e10 S/m
      */
     public static Barrier of(List<Layer> layers) {
         return new Barrier(checked(Require.nonNull("layers", layers)));
@@ -98,6 +108,9 @@ public final class Barrier {
      * @param medium    the medium or catalogue material, not null
      * @param thickness its thickness
      * @return the new barrier
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m or the
+     *         conductivity is above 1e10 S/m
+     * @throws IllegalArgumentException if the barrier would have more than {@value #MAX_LAYERS} layers
      */
     public Barrier then(MediumSource medium, Length thickness) {
         return then(Layer.of(medium, thickness));
@@ -109,6 +122,8 @@ public final class Barrier {
      * @param layer the layer, not null
      * @return the new barrier
      * @throws NullPointerException if the layer is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the layer's conductivity is above 1e10 S/m
+     * @throws IllegalArgumentException if the barrier would have more than {@value #MAX_LAYERS} layers
      */
     public Barrier then(Layer layer) {
         List<Layer> l = new ArrayList<>(layers);
@@ -121,6 +136,8 @@ public final class Barrier {
      *
      * @param thickness the gap
      * @return the new barrier
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m
+     * @throws IllegalArgumentException if the barrier would have more than {@value #MAX_LAYERS} layers
      */
     public Barrier thenGap(Length thickness) {
         return then(Layer.gap(thickness));
@@ -132,6 +149,8 @@ public final class Barrier {
      * @param rs the sheet resistance
      * @return the new barrier
      * @see Layer#film(SheetResistance)
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the film's conductivity 1/(Rs·1 µm) is above 1e10 S/m
+     * @throws IllegalArgumentException if the barrier would have more than {@value #MAX_LAYERS} layers
      */
     public Barrier thenFilm(SheetResistance rs) {
         return then(Layer.film(rs));

@@ -71,6 +71,7 @@ public final class Layer {
      *
      * @param rs the sheet resistance, not null
      * @return the layer
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if σ = 1/(Rs·1 µm) is not finite
      */
     public static Layer film(SheetResistance rs) {
         return film(rs, NOMINAL_FILM_THICKNESS);
@@ -126,6 +127,7 @@ public final class Layer {
      *
      * @param newThickness the thickness, from 1 pm to 100 m
      * @return the new layer; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m
      */
     public Layer withThickness(Length newThickness) {
         return make(medium, newThickness, gap);

@@ -151,6 +151,7 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
      *
      * @param hertz frequencies in Hz, each from 1 µHz to 10 THz, not null
      * @return SE in dB at each frequency
+     * @throws InvalidQuantityException if a frequency is out of range (named by its index)
      */
     public double[] shieldingEffectivenessDb(double[] hertz) {
         return shieldingEffectivenessDb(hertz, new double[Require.nonNull("frequencies", hertz).length]);

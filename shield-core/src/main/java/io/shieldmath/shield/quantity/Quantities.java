@@ -29,6 +29,7 @@ public final class Quantities {
      *
      * @param value the value in hertz
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Frequency#ofHertz(double)} accepts
      */
     public static Frequency Hz(double value) {
         return Frequency.ofHertz(value);
@@ -39,6 +40,7 @@ public final class Quantities {
      *
      * @param value the value in kilohertz
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Frequency#ofKilohertz(double)} accepts
      */
     public static Frequency kHz(double value) {
         return Frequency.ofKilohertz(value);
@@ -49,6 +51,7 @@ public final class Quantities {
      *
      * @param value the value in megahertz
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Frequency#ofMegahertz(double)} accepts
      */
     public static Frequency MHz(double value) {
         return Frequency.ofMegahertz(value);
@@ -59,6 +62,7 @@ public final class Quantities {
      *
      * @param value the value in gigahertz
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Frequency#ofGigahertz(double)} accepts
      */
     public static Frequency GHz(double value) {
         return Frequency.ofGigahertz(value);
@@ -69,6 +73,7 @@ public final class Quantities {
      *
      * @param value the value in metres
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Length#ofMetres(double)} accepts
      */
     public static Length m(double value) {
         return Length.ofMetres(value);
@@ -79,6 +84,7 @@ public final class Quantities {
      *
      * @param value the value in centimetres
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Length#ofCentimetres(double)} accepts
      */
     public static Length cm(double value) {
         return Length.ofCentimetres(value);
@@ -89,6 +95,7 @@ public final class Quantities {
      *
      * @param value the value in millimetres
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Length#ofMillimetres(double)} accepts
      */
     public static Length mm(double value) {
         return Length.ofMillimetres(value);
@@ -99,6 +106,7 @@ public final class Quantities {
      *
      * @param value the value in micrometres
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Length#ofMicrometres(double)} accepts
      */
     public static Length um(double value) {
         return Length.ofMicrometres(value);
@@ -109,6 +117,7 @@ public final class Quantities {
      *
      * @param value the value in nanometres
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Length#ofNanometres(double)} accepts
      */
     public static Length nm(double value) {
         return Length.ofNanometres(value);
@@ -119,6 +128,7 @@ public final class Quantities {
      *
      * @param value the value in mils
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Length#ofMils(double)} accepts
      */
     public static Length mil(double value) {
         return Length.ofMils(value);
@@ -129,6 +139,7 @@ public final class Quantities {
      *
      * @param value the value in inches
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Length#ofInches(double)} accepts
      */
     public static Length inch(double value) {
         return Length.ofInches(value);
@@ -139,6 +150,7 @@ public final class Quantities {
      *
      * @param value the value in S/m
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Conductivity#ofSiemensPerMetre(double)} accepts
      */
     public static Conductivity siemensPerMetre(double value) {
         return Conductivity.ofSiemensPerMetre(value);
@@ -149,6 +161,7 @@ public final class Quantities {
      *
      * @param value the value in MS/m
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Conductivity#ofMegasiemensPerMetre(double)} accepts
      */
     public static Conductivity megasiemensPerMetre(double value) {
         return Conductivity.ofMegasiemensPerMetre(value);
@@ -159,6 +172,7 @@ public final class Quantities {
      *
      * @param value the value in % IACS
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Conductivity#ofPercentIacs(double)} accepts
      */
     public static Conductivity iacs(double value) {
         return Conductivity.ofPercentIacs(value);
@@ -169,6 +183,7 @@ public final class Quantities {
      *
      * @param value the value in Ω/sq
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link SheetResistance#ofOhmsPerSquare(double)} accepts
      */
     public static SheetResistance ohmsPerSquare(double value) {
         return SheetResistance.ofOhmsPerSquare(value);
@@ -179,6 +194,7 @@ public final class Quantities {
      *
      * @param value the value in A/m
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link MagneticFieldStrength#ofAmperesPerMetre(double)} accepts
      */
     public static MagneticFieldStrength amperesPerMetre(double value) {
         return MagneticFieldStrength.ofAmperesPerMetre(value);
@@ -189,6 +205,7 @@ public final class Quantities {
      *
      * @param value the value in oersteds
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link MagneticFieldStrength#ofOersteds(double)} accepts
      */
     public static MagneticFieldStrength oersted(double value) {
         return MagneticFieldStrength.ofOersteds(value);
@@ -199,6 +216,7 @@ public final class Quantities {
      *
      * @param value the value in tesla
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link MagneticFluxDensity#ofTesla(double)} accepts
      */
     public static MagneticFluxDensity tesla(double value) {
         return MagneticFluxDensity.ofTesla(value);
@@ -209,6 +227,7 @@ public final class Quantities {
      *
      * @param value the value in millitesla
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link MagneticFluxDensity#ofMillitesla(double)} accepts
      */
     public static MagneticFluxDensity mT(double value) {
         return MagneticFluxDensity.ofMillitesla(value);
@@ -219,6 +238,7 @@ public final class Quantities {
      *
      * @param value the value in microtesla
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link MagneticFluxDensity#ofMicrotesla(double)} accepts
      */
     public static MagneticFluxDensity uT(double value) {
         return MagneticFluxDensity.ofMicrotesla(value);
@@ -229,6 +249,7 @@ public final class Quantities {
      *
      * @param value the value in nanotesla
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link MagneticFluxDensity#ofNanotesla(double)} accepts
      */
     public static MagneticFluxDensity nT(double value) {
         return MagneticFluxDensity.ofNanotesla(value);
@@ -239,6 +260,7 @@ public final class Quantities {
      *
      * @param value the value in gauss
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link MagneticFluxDensity#ofGauss(double)} accepts
      */
     public static MagneticFluxDensity gauss(double value) {
         return MagneticFluxDensity.ofGauss(value);
@@ -248,6 +270,7 @@ public final class Quantities {
      *
      * @param value the value in kg/m³
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Density#ofKilogramsPerCubicMetre(double)} accepts
      */
     public static Density kgPerCubicMetre(double value) {
         return Density.ofKilogramsPerCubicMetre(value);
@@ -258,6 +281,7 @@ public final class Quantities {
      *
      * @param value the value in g/cm³
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Density#ofGramsPerCubicCentimetre(double)} accepts
      */
     public static Density gPerCubicCentimetre(double value) {
         return Density.ofGramsPerCubicCentimetre(value);
@@ -268,6 +292,7 @@ public final class Quantities {
      *
      * @param value the value in kg/m²
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link ArealMass#ofKilogramsPerSquareMetre(double)} accepts
      */
     public static ArealMass kgPerSquareMetre(double value) {
         return ArealMass.ofKilogramsPerSquareMetre(value);
@@ -278,6 +303,7 @@ public final class Quantities {
      *
      * @param value the value in g/m²
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link ArealMass#ofGramsPerSquareMetre(double)} accepts
      */
     public static ArealMass gPerSquareMetre(double value) {
         return ArealMass.ofGramsPerSquareMetre(value);
@@ -288,6 +314,7 @@ public final class Quantities {
      *
      * @param value the value in °C
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Temperature#ofCelsius(double)} accepts
      */
     public static Temperature celsius(double value) {
         return Temperature.ofCelsius(value);
@@ -298,6 +325,7 @@ public final class Quantities {
      *
      * @param value the value in K
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Temperature#ofKelvin(double)} accepts
      */
     public static Temperature kelvin(double value) {
         return Temperature.ofKelvin(value);
@@ -308,6 +336,7 @@ public final class Quantities {
      *
      * @param value the value in 1/K
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link TemperatureCoefficient#ofPerKelvin(double)} accepts
      */
     public static TemperatureCoefficient perKelvin(double value) {
         return TemperatureCoefficient.ofPerKelvin(value);
@@ -318,6 +347,7 @@ public final class Quantities {
      *
      * @param value the value in ppm/K
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link TemperatureCoefficient#ofPpmPerKelvin(double)} accepts
      */
     public static TemperatureCoefficient ppmPerKelvin(double value) {
         return TemperatureCoefficient.ofPpmPerKelvin(value);
@@ -328,6 +358,7 @@ public final class Quantities {
      *
      * @param value the value in V
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link VoltageAmplitude#ofVolts(double)} accepts
      */
     public static VoltageAmplitude V(double value) {
         return VoltageAmplitude.ofVolts(value);
@@ -338,6 +369,7 @@ public final class Quantities {
      *
      * @param value the value in mV
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link VoltageAmplitude#ofMillivolts(double)} accepts
      */
     public static VoltageAmplitude mV(double value) {
         return VoltageAmplitude.ofMillivolts(value);
@@ -348,6 +380,7 @@ public final class Quantities {
      *
      * @param value the value in µV
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link VoltageAmplitude#ofMicrovolts(double)} accepts
      */
     public static VoltageAmplitude uV(double value) {
         return VoltageAmplitude.ofMicrovolts(value);
@@ -358,6 +391,7 @@ public final class Quantities {
      *
      * @param value the value in A
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link CurrentAmplitude#ofAmperes(double)} accepts
      */
     public static CurrentAmplitude A(double value) {
         return CurrentAmplitude.ofAmperes(value);
@@ -368,6 +402,7 @@ public final class Quantities {
      *
      * @param value the value in mA
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link CurrentAmplitude#ofMilliamperes(double)} accepts
      */
     public static CurrentAmplitude mA(double value) {
         return CurrentAmplitude.ofMilliamperes(value);
@@ -378,6 +413,7 @@ public final class Quantities {
      *
      * @param value the value in H
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Inductance#ofHenries(double)} accepts
      */
     public static Inductance H(double value) {
         return Inductance.ofHenries(value);
@@ -388,6 +424,7 @@ public final class Quantities {
      *
      * @param value the value in mH
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Inductance#ofMillihenries(double)} accepts
      */
     public static Inductance mH(double value) {
         return Inductance.ofMillihenries(value);
@@ -398,6 +435,7 @@ public final class Quantities {
      *
      * @param value the value in µH
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Inductance#ofMicrohenries(double)} accepts
      */
     public static Inductance uH(double value) {
         return Inductance.ofMicrohenries(value);
@@ -408,6 +446,7 @@ public final class Quantities {
      *
      * @param value the value in nH
      * @return the quantity
+     * @throws InvalidQuantityException if the value is out of the range {@link Inductance#ofNanohenries(double)} accepts
      */
     public static Inductance nH(double value) {
         return Inductance.ofNanohenries(value);

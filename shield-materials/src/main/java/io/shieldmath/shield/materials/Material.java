@@ -482,6 +482,9 @@ public final class Material implements MediumSource {
          * @param sigma  σ, from 0 to 1e9 S/m
          * @param source where the value comes from, not blank
          * @return this builder
+         * @throws InvalidQuantityException if σ is outside 0 to 1e9 S/m
+         * @throws IllegalArgumentException if the source is blank or longer than 1000 characters, or claims
+         *         "checked against" without naming the source and where it was read
          */
         public Builder conductivity(Conductivity sigma, String source) {
             Require.inRange(id + " conductivity", Require.nonNull("conductivity", sigma).toSiemensPerMetre(),
@@ -499,6 +502,9 @@ public final class Material implements MediumSource {
          * @param thickness the nominal thickness, from 10 nm to 10 mm
          * @param source    where the values come from, not blank
          * @return this builder
+         * @throws InvalidQuantityException if Rs or the thickness is out of range
+         * @throws IllegalArgumentException if the source is blank or longer than 1000 characters, or claims
+         *         "checked against" without naming the source and where it was read
          */
         public Builder sheetResistance(SheetResistance rs, Length thickness, String source) {
             Require.inRange(id + " sheet resistance", Require.nonNull("sheet resistance", rs).toOhmsPerSquare(),
@@ -533,6 +539,9 @@ public final class Material implements MediumSource {
          * @param model  µr(f), static value at most 1e7, not null
          * @param source where the values come from, not blank
          * @return this builder
+         * @throws InvalidQuantityException if the static µr is outside 0 to 1e7
+         * @throws IllegalArgumentException if the source is blank or longer than 1000 characters, or claims
+         *         "checked against" without naming the source and where it was read
          */
         public Builder permeability(PermeabilityModel model, String source) {
             Require.nonNull("permeability model", model);
@@ -548,6 +557,9 @@ public final class Material implements MediumSource {
          * @param epsilon εr, from 1 to 1e6
          * @param source  where the value comes from, not blank
          * @return this builder
+         * @throws InvalidQuantityException if εr is outside 1 to 1e6
+         * @throws IllegalArgumentException if the source is blank or longer than 1000 characters, or claims
+         *         "checked against" without naming the source and where it was read
          */
         public Builder permittivity(RelativePermittivity epsilon, String source) {
             Require.inRange(id + " relative permittivity", Require.nonNull("permittivity", epsilon).value(),
@@ -563,6 +575,9 @@ public final class Material implements MediumSource {
          * @param rho    ρ, from 0.01 to 30 000 kg/m³
          * @param source where the value comes from, not blank
          * @return this builder
+         * @throws InvalidQuantityException if ρ is outside 0.01 to 30 000 kg/m³
+         * @throws IllegalArgumentException if the source is blank or longer than 1000 characters, or claims
+         *         "checked against" without naming the source and where it was read
          */
         public Builder density(Density rho, String source) {
             Require.inRange(id + " density", Require.nonNull("density", rho).toKilogramsPerCubicMetre(),
@@ -578,6 +593,9 @@ public final class Material implements MediumSource {
          * @param bs     Bs, from 0.01 T to 3 T
          * @param source where the value comes from, not blank
          * @return this builder
+         * @throws InvalidQuantityException if Bs is outside 0.01 T to 3 T
+         * @throws IllegalArgumentException if the source is blank or longer than 1000 characters, or claims
+         *         "checked against" without naming the source and where it was read
          */
         public Builder saturation(MagneticFluxDensity bs, String source) {
             Require.inRange(id + " saturation flux density", Require.nonNull("saturation", bs).toTesla(),
@@ -592,6 +610,7 @@ public final class Material implements MediumSource {
          *
          * @param text the note, 1 to 1000 characters
          * @return this builder
+         * @throws IllegalArgumentException if the text is blank or longer than 1000 characters
          */
         public Builder note(String text) {
             this.note = Require.text(id + " note", text, 1000);

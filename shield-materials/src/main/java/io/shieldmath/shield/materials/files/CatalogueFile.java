@@ -174,6 +174,8 @@ public final class CatalogueFile {
      *
      * @param catalogue the catalogue, not null
      * @return the document, pretty-printed
+     * @throws IllegalArgumentException if a permeability model is of a type the files do not hold (only
+     *         constant, relaxation and table models are written)
      */
     public static String toJson(Catalogue catalogue) {
         return writeCatalogue(Require.nonNull("catalogue", catalogue));
@@ -185,6 +187,7 @@ public final class CatalogueFile {
      * @param catalogue the catalogue, not null
      * @param file      the file, not null
      * @throws IOException if the file cannot be written
+     * @throws IllegalArgumentException if a permeability model is of a type the files do not hold
      */
     public static void write(Catalogue catalogue, Path file) throws IOException {
         Files.writeString(Require.nonNull("file", file), toJson(catalogue), StandardCharsets.UTF_8);

@@ -108,6 +108,7 @@ public final class Design {
      *
      * @param newTitle the title, at most 200 characters without control characters; empty for none
      * @return the new design; this one is unchanged
+     * @throws IllegalArgumentException if the title is longer than 200 characters or holds control characters
      */
     public Design withTitle(String newTitle) {
         Require.nonNull("title", newTitle);

@@ -51,6 +51,7 @@ public final class DesignLayer {
      * @param material  the material, not null
      * @param thickness the thickness, 1 pm to 100 m
      * @return the layer
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m
      */
     public static DesignLayer of(Material material, Length thickness) {
         Require.nonNull("material", material);
@@ -92,6 +93,7 @@ public final class DesignLayer {
      * @param medium    the medium, not null
      * @param thickness the thickness, 1 pm to 100 m
      * @return the layer
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m
      */
     public static DesignLayer medium(Medium medium, Length thickness) {
         return new DesignLayer(Kind.MEDIUM, null, null, Require.nonNull("medium", medium), thickness);
@@ -102,6 +104,7 @@ public final class DesignLayer {
      *
      * @param thickness the gap, 1 pm to 100 m
      * @return the layer
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the thickness is outside 1 pm to 100 m
      */
     public static DesignLayer gap(Length thickness) {
         return new DesignLayer(Kind.GAP, null, null, Medium.AIR, thickness);
