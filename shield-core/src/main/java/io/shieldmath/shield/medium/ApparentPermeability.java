@@ -280,7 +280,7 @@ public final class ApparentPermeability implements PermeabilityModel {
 
     /**
      * A description such as {@code "µr table of 4 points, 10 Hz to 100 kHz, converted from the
-     * apparent µ of a 0.35 mm sheet"}.
+     * apparent µ of a 350 µm sheet"}.
      *
      * @return the description
      */
