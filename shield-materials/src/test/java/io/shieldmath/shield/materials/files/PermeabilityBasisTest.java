@@ -94,6 +94,28 @@ class PermeabilityBasisTest {
     }
 
     @Test
+    void aDesignMediumMayGiveAnApparentTable() {
+        // The same invented sheet as a medium of a design file: converted with the medium's own conductivity.
+        String json = String.join("\n",
+                "{",
+                "  \"format\": \"shield-design\", \"version\": 1, \"title\": \"trial\",",
+                "  \"layers\": [",
+                "    {\"medium\": {\"name\": \"trial sheet\", \"conductivity\": \"2 MS/m\", \"permeability\": ",
+                "      {\"model\": \"table\", \"basis\": \"apparent\", \"sheetThickness\": \"0.2 mm\", \"points\": ",
+                "        [{\"frequency\": \"1 kHz\", \"real\": 7951, \"loss\": 6942}]}}, \"thickness\": \"0.2 mm\"}",
+                "  ],",
+                "  \"field\": {\"kind\": \"plane-wave\"},",
+                "  \"band\": \"100 Hz to 10 kHz\",",
+                "  \"points\": 5",
+                "}");
+        Design d = DesignFile.parse(json, Catalogue.builtIn());
+        ApparentPermeability a = assertInstanceOf(ApparentPermeability.class,
+                d.barrier().layers().get(0).medium().permeability());
+        assertEquals(15000, a.real(1e3), 5);
+        assertEquals(d, DesignFile.parse(DesignFile.toJson(d), Catalogue.builtIn()));
+    }
+
+    @Test
     void everyBuiltInFrequencyModelSaysItIsIntrinsic() {
         // The built-in catalogue states "basis": "intrinsic" for each relaxation and table (version 3).
         String text = new String(readResource(), java.nio.charset.StandardCharsets.UTF_8);
