@@ -36,6 +36,8 @@ public final class CoilPair {
     private final Coil receiver;
     private final double separation;
     private final double gap;
+    private final double transmitterFace;
+    private final double largestRadius;
     private final SpectralRule rule;
     private final double freeSpace;
 
@@ -57,6 +59,7 @@ public final class CoilPair {
             rxFace = Math.min(rxFace, separation + z);
         }
         this.gap = rxFace - txFace;
+        this.transmitterFace = txFace;
         double rho = 0;
         for (double r : ta) {
             rho = Math.max(rho, r);
@@ -64,6 +67,7 @@ public final class CoilPair {
         for (double r : ra) {
             rho = Math.max(rho, r);
         }
+        this.largestRadius = rho;
         if (!(gap >= MIN_GAP_RATIO * rho)) {
             throw new IllegalArgumentException("the gap between the coils' nearest windings is " + gap
                     + " m; it must be at least " + MIN_GAP_RATIO + " times the largest ring radius ("
@@ -171,23 +175,68 @@ public final class CoilPair {
     }
 
     /**
-     * This pair with an infinite planar barrier between the coils, the barrier's first layer
-     * facing the transmitter. Where the barrier sits in the gap does not matter (only the
-     * total air path changes, and it stays the same), so air gaps in the barrier are allowed
-     * but not needed to place it.
+     * This pair with an infinite planar barrier centred in the gap between the coils, the
+     * barrier's first layer facing the transmitter. Where the barrier sits in the gap does
+     * not change the exact result (only the total air path matters, and it stays the same);
+     * it changes only the hand estimate beside it ({@link CouplingEvaluation#planarEstimate()}),
+     * which puts the source at the transmitter and the barrier at its actual distance. For a
+     * single-ring pair the centred barrier's near face is (d − t)/2 from the transmitter.
      *
      * @param barrier the barrier, not null, no thicker than {@link #gap()} (to rounding, 1e-12 relative)
      * @return the evaluation, ready for frequencies
+     * @throws NullPointerException     if the barrier is null
      * @throws IllegalArgumentException if the barrier does not fit between the coils
      */
     public CouplingEvaluation through(Barrier barrier) {
+        double t = fitting(barrier);
+        return new CouplingEvaluation(this, barrier, transmitterFace + Math.max(0, gap - t) / 2);
+    }
+
+    /**
+     * This pair with an infinite planar barrier at a given place between the coils, the
+     * barrier's first layer facing the transmitter. The exact result is the same wherever
+     * the barrier sits; the place is used by the hand estimate beside it
+     * ({@link CouplingEvaluation#planarEstimate()}).
+     *
+     * @param barrier              the barrier, not null, no thicker than {@link #gap()}
+     * @param transmitterToBarrier the distance from the transmitter's centre plane to the
+     *                             barrier's near face, not null; the whole barrier must lie
+     *                             between the nearest windings of the two coils (to rounding,
+     *                             1e-12 of the gap)
+     * @return the evaluation, ready for frequencies
+     * @throws NullPointerException     if an argument is null
+     * @throws IllegalArgumentException if the barrier does not fit between the coils at that place
+     */
+    public CouplingEvaluation through(Barrier barrier, Length transmitterToBarrier) {
+        double t = fitting(barrier);
+        double r = Require.nonNull("transmitter-to-barrier distance", transmitterToBarrier).toMetres();
+        double slack = 1e-12 * gap;
+        if (r < transmitterFace - slack || r + t > transmitterFace + gap + slack) {
+            throw new IllegalArgumentException("a barrier " + Length.ofMetres(t) + " thick placed "
+                    + transmitterToBarrier + " from the transmitter does not fit between the coils: its near face "
+                    + "must be from " + metres(transmitterFace) + " to " + metres(transmitterFace + gap - t)
+                    + " from the transmitter");
+        }
+        return new CouplingEvaluation(this, barrier, r);
+    }
+
+    private static String metres(double m) {
+        return String.format(java.util.Locale.ROOT, "%.6g m", m);
+    }
+
+    private double fitting(Barrier barrier) {
         Require.nonNull("barrier", barrier);
         double t = barrier.totalThickness().toMetres();
         if (t > gap * (1 + 1e-12)) {
             throw new IllegalArgumentException("the barrier is " + t + " m thick but the gap between the coils is only "
                     + gap + " m");
         }
-        return new CouplingEvaluation(this, barrier);
+        return t;
+    }
+
+    /** The largest ring radius of either coil, m. */
+    double largestRadiusMetres() {
+        return largestRadius;
     }
 
     SpectralRule rule() {

@@ -16,6 +16,10 @@ import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.internal.SpectralChain;
 import io.shieldmath.shield.internal.StackAccess;
 import io.shieldmath.shield.internal.StackArrays;
+import io.shieldmath.shield.internal.Validity;
+import io.shieldmath.shield.model.ValidityNote;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * A coil pair with an infinite planar barrier between the coils, evaluated exactly in the
@@ -32,7 +36,8 @@ import io.shieldmath.shield.internal.StackArrays;
  *
  * <p>Validity: quasi-static, so the coils and their separation must be small against the
  * free-space wavelength (k0·max(radius, d) below about 0.1, for 10 cm coils up to some tens
- * of MHz); the permittivity of the layers is ignored. The barrier is infinite: a real plate
+ * of MHz; above it each result carries a {@link io.shieldmath.shield.model.ValidityNote.Limit#QUASI_STATIC}
+ * note, {@link CouplingResult#validityNotes()}); the permittivity of the layers is ignored. The barrier is infinite: a real plate
  * lets field round its edges, so a bench measurement saturates below this result (see
  * {@link io.shieldmath.shield.bench.BenchComparison}). Quadrature accuracy: 1e-6 relative or better from 1 Hz to
  * 10 MHz, radii 1 mm to 1 m, gaps 0.1 to 10 radii, stacks of microns to centimetres,
@@ -58,14 +63,29 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
     private final Barrier barrier;
     private final StackArrays stack;
     private final PlanarEvaluation planar;
+    private final double position;
 
-    CouplingEvaluation(CoilPair pair, Barrier barrier) {
+    CouplingEvaluation(CoilPair pair, Barrier barrier, double transmitterToBarrier) {
         this.pair = pair;
         this.barrier = barrier;
+        this.position = transmitterToBarrier;
         // The arrays the barrier already holds (one copy per barrier, checked once).
         stack = StackAccess.ofBarrier(barrier);
-        planar = barrier.facing(IncidentField.magneticNearField(Length.ofMetres(pair.separationMetres()),
-                ImpedanceForm.TEXTBOOK));
+        // A barrier that fills the whole gap of a flat loop touches it (r = 0); the estimate then
+        // puts the source a thousandth of the gap away, as the impedance 2πfµ0·r needs r > 0.
+        double r = Math.max(transmitterToBarrier, 1e-3 * pair.gap().toMetres());
+        planar = barrier.facing(IncidentField.magneticNearField(Length.ofMetres(r), ImpedanceForm.TEXTBOOK));
+    }
+
+    /**
+     * The distance from the transmitter's centre plane to the barrier's near face, as placed
+     * by {@link CoilPair#through(Barrier)} (centred in the gap) or
+     * {@link CoilPair#through(Barrier, Length)}. It does not change the exact result.
+     *
+     * @return the distance
+     */
+    public Length transmitterToBarrier() {
+        return Length.ofMetres(Math.max(position, 1e-3 * pair.gap().toMetres()));
     }
 
     /**
@@ -87,12 +107,20 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
     }
 
     /**
-     * The transmission-line stand-in for this case: the same barrier in the near field of a
-     * magnetic source with the textbook wave impedance |Zw| = 2πf·µ0·r at r = d, the coils'
-     * centre-plane separation (the hand formula of H. W. Ott, Electromagnetic Compatibility Engineering, Wiley 2009, ch. 6). It is what a hand calculation would give; the
-     * difference from {@link #at(Frequency)} is the size of that approximation.
+     * The hand estimate of this case: the transmission-line (Schelkunoff) shielding
+     * effectiveness SE = A + R + B of the same barrier in the near field of a magnetic
+     * (loop) source, with the textbook wave impedance |Zw| = 2πf·µ0·r taken as a real
+     * number, r the distance from the transmitter to the barrier's near face
+     * ({@link #transmitterToBarrier()}; (d − t)/2 for a centred barrier between single
+     * loops). This is the magnetic near-field estimate of H. W. Ott, Electromagnetic
+     * Compatibility Engineering, Wiley 2009, ch. 6, with R and B from their exact
+     * single-layer forms rather than the rounded formula R = 14.6 + 10·log10(f·r²·σr/µr).
+     * It is what a careful hand calculation gives; the difference from {@link #at(Frequency)}
+     * is the size of that approximation (a loop's field is not a plane wave of one
+     * impedance). Earlier releases put the source at r = d, the coil-to-coil distance, which
+     * overstated the estimate by about 6 dB for a centred plate.
      *
-     * @return the planar evaluation
+     * @return the planar evaluation; its results carry their own validity notes
      */
     public PlanarEvaluation planarEstimate() {
         return planar;
@@ -176,8 +204,11 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
         double il = lossDb(out, hz);
         double logM = Numerics.logAbs(out[0], out[1]) - out[2];
         double phase = Math.atan2(out[1], out[0]);
+        List<ValidityNote> notes = new ArrayList<>(1);
+        Validity.quasiStatic(hz, Math.max(pair.largestRadiusMetres(), pair.separationMetres()),
+                "the coil coupling model", notes);
         return new CouplingResult(frequency, pair.freeSpaceHenries(), logM, phase, il,
-                planar.at(frequency));
+                planar.at(frequency), List.copyOf(notes));
     }
 
     private double lossDb(double[] out, double hz) {

@@ -9,6 +9,8 @@ import io.shieldmath.shield.quantity.Complex;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Inductance;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.model.ValidityNote;
+import java.util.List;
 import java.util.Locale;
 
 /**
@@ -37,9 +39,11 @@ public final class CouplingResult implements ShieldingResult {
     private final double phase;
     private final double lossDb;
     private final PlanarResult planar;
+    private final List<ValidityNote> notes;
 
     CouplingResult(Frequency frequency, double freeSpace, double logM, double phase, double lossDb,
-                   PlanarResult planar) {
+                   PlanarResult planar, List<ValidityNote> notes) {
+        this.notes = notes;
         this.frequency = frequency;
         this.freeSpace = freeSpace;
         this.logM = logM;
@@ -101,8 +105,12 @@ public final class CouplingResult implements ShieldingResult {
     }
 
     /**
-     * The transmission-line model's shielding effectiveness for the same barrier and frequency
-     * (textbook magnetic wave impedance at r = d), to show beside {@link #shieldingEffectivenessDb()}.
+     * The hand estimate of the same case: the transmission-line model's shielding
+     * effectiveness with the textbook magnetic wave impedance |Zw| = 2πfµ0·r at the
+     * barrier's actual distance r from the transmitter (see
+     * {@link CouplingEvaluation#planarEstimate()}), to show beside
+     * {@link #shieldingEffectivenessDb()}. Its own {@link PlanarResult#validityNotes()} say
+     * where that hand formula is unreliable (|K| &lt; 3).
      *
      * @return the planar result, with its absorption, reflection and B parts
      */
@@ -149,6 +157,18 @@ public final class CouplingResult implements ShieldingResult {
                     + " but this result is at " + frequency);
         }
         return frequency.angular() * m * drive.amperes(AmplitudeMeasure.PEAK);
+    }
+
+    /**
+     * The notes on this result's validity: {@link ValidityNote.Limit#QUASI_STATIC} where
+     * k0·max(largest coil radius, d) is above 0.1. The notes of the hand estimate are on
+     * {@link #planarEstimate()}.
+     *
+     * @return an unmodifiable list, empty inside the limits
+     */
+    @Override
+    public List<ValidityNote> validityNotes() {
+        return notes;
     }
 
     @Override

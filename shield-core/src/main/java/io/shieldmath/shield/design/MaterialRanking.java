@@ -23,6 +23,12 @@ import java.util.Locale;
  * candidates that cannot meet the target within the limit are listed apart with the
  * reason. Ties (criterion values equal to 9 significant digits) are broken by thickness,
  * then by name, and the tie is written in the entry's note. Stateless and thread-safe.
+ *
+ * <p>What is optimised: the model's own result. For a planar barrier that is an infinite
+ * sheet, and for a shell a closed shell without seams; real plates lose field round their
+ * edges and real enclosures through seams and holes, so a design found here is an upper
+ * estimate until it is checked with a finite-geometry model (the axisymmetric module, an
+ * enclosure with its openings) or by measurement.
  */
 public final class MaterialRanking {
 

@@ -11,6 +11,12 @@ import java.util.Locale;
 /**
  * The result of {@link MaterialRanking}: the candidates that meet the target, best
  * first, and those that do not, with the reason. Immutable and thread-safe.
+ *
+ * <p>What is optimised: the model's own result. For a planar barrier that is an infinite
+ * sheet, and for a shell a closed shell without seams; real plates lose field round their
+ * edges and real enclosures through seams and holes, so a design found here is an upper
+ * estimate until it is checked with a finite-geometry model (the axisymmetric module, an
+ * enclosure with its openings) or by measurement.
  */
 public final class Ranking {
 

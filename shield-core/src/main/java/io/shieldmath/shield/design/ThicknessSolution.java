@@ -9,6 +9,12 @@ import io.shieldmath.shield.quantity.Length;
  * The answer of {@link ThicknessSolver}: the thinnest wall that meets the target, or
  * the statement that none up to the limit does, with the shortfall. Immutable and
  * thread-safe.
+ *
+ * <p>What is optimised: the model's own result. For a planar barrier that is an infinite
+ * sheet, and for a shell a closed shell without seams; real plates lose field round their
+ * edges and real enclosures through seams and holes, so a design found here is an upper
+ * estimate until it is checked with a finite-geometry model (the axisymmetric module, an
+ * enclosure with its openings) or by measurement.
  */
 public final class ThicknessSolution {
 

@@ -28,6 +28,12 @@ import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
  * stack at a resonance) the scan still returns the first crossing. When even the
  * largest thickness cannot meet the target (for example because an opening limits an
  * enclosure) the solution says so with the shortfall. Stateless and thread-safe.
+ *
+ * <p>What is optimised: the model's own result. For a planar barrier that is an infinite
+ * sheet, and for a shell a closed shell without seams; real plates lose field round their
+ * edges and real enclosures through seams and holes, so a design found here is an upper
+ * estimate until it is checked with a finite-geometry model (the axisymmetric module, an
+ * enclosure with its openings) or by measurement.
  */
 public final class ThicknessSolver {
 

@@ -12,6 +12,10 @@ import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.internal.Require;
 import java.util.ArrayList;
 import java.util.List;
+import io.shieldmath.shield.model.ValidityNote;
+import io.shieldmath.shield.planar.PlanarResult;
+import io.shieldmath.shield.quantity.Length;
+import java.util.Locale;
 import java.util.Optional;
 
 /**
@@ -40,6 +44,16 @@ public final class EnclosureEvaluation implements ShieldingModel<EnclosureResult
     static EnclosureEvaluation facing(Enclosure enclosure, IncidentField field) {
         return new EnclosureEvaluation(enclosure, Optional.of(field));
     }
+
+    /**
+     * The largest hole radius over victim distance, r/d, for which Bethe's small-hole law
+     * is used without a {@link ValidityNote.Limit#SMALL_HOLE} note (the law needs r ≪ d; at
+     * r/d = 0.2 the dipole's neglected higher terms are of order (r/d)², a few per cent
+     * of the field: common practice, no source).
+     */
+    static final double SMALL_HOLE_LIMIT = 0.2;
+    /** From this static µ' of a wall on, holes in a uniform field get a high-permeability note. */
+    static final double HIGH_PERMEABILITY = 10;
 
     static EnclosureEvaluation inUniformField(Enclosure enclosure) {
         return new EnclosureEvaluation(enclosure, Optional.empty());
@@ -87,11 +101,12 @@ public final class EnclosureEvaluation implements ShieldingModel<EnclosureResult
         if (wave.isEmpty()) {
             ShellResult wall = enclosure.shell().at(frequency);
             return combine(enclosure, frequency, wall.shieldingEffectivenessDb(), "shell in a uniform field",
-                    frequency.toHertz(), false);
+                    frequency.toHertz(), false, wall.validityNotes());
         }
         IncidentField field = wave.get();
-        double wallDb = enclosure.shell().toBarrier().facing(field).at(frequency).shieldingEffectivenessDb();
-        return combine(enclosure, frequency, wallDb, "planar wall facing " + field, frequency.toHertz(), true);
+        PlanarResult wall = enclosure.shell().toBarrier().facing(field).at(frequency);
+        return combine(enclosure, frequency, wall.shieldingEffectivenessDb(), "planar wall facing " + field,
+                frequency.toHertz(), true, wall.validityNotes());
     }
 
     /**
@@ -117,6 +132,13 @@ public final class EnclosureEvaluation implements ShieldingModel<EnclosureResult
      */
     static EnclosureResult combine(Enclosure e, Frequency frequency, double wallDb, String wallModel, double hz,
                                    boolean wave) {
+        return combine(e, frequency, wallDb, wallModel, hz, wave, List.of());
+    }
+
+    /** As above, with the wall model's validity notes, to which the openings' notes are added. */
+    static EnclosureResult combine(Enclosure e, Frequency frequency, double wallDb, String wallModel, double hz,
+                                   boolean wave, List<ValidityNote> wallNotes) {
+        List<ValidityNote> notes = new ArrayList<>(wallNotes);
         List<Opening> ops = e.openings();
         int n = ops.size() + 1;
         double[] db = new double[n];
@@ -133,8 +155,10 @@ public final class EnclosureEvaluation implements ShieldingModel<EnclosureResult
                 models[i + 1] = "aperture rule λ/(2L)" + (o.count() > 1 ? ", sqrt(n)" : "")
                         + (o.tubeDepth().isPresent() ? ", tube below cut-off" : "");
             } else {
-                db[i + 1] = o.magneticDb(hz, s.geometry(), s.shape().innerRadius().toMetres());
+                double inner = s.shape().innerRadius().toMetres();
+                db[i + 1] = o.magneticDb(hz, s.geometry(), inner);
                 models[i + 1] = "Bethe magnetic polarizability" + (o.tubeDepth().isPresent() ? ", tube below cut-off" : "");
+                openingNotes(o, inner, s, hz, notes);
             }
             names[i + 1] = o.name();
         }
@@ -155,7 +179,28 @@ public final class EnclosureEvaluation implements ShieldingModel<EnclosureResult
             double share = Math.exp(-p * db[i] / Numerics.DB_PER_NEPER - max) / sum;
             paths.add(new LeakagePath(names[i], i == 0, db[i], share, models[i]));
         }
-        return new EnclosureResult(frequency, e.pathSum(), total, paths);
+        return new EnclosureResult(frequency, e.pathSum(), total, paths, List.copyOf(notes));
+    }
+
+    /** The notes of one opening in a uniform magnetic field: a hole not small against d, a high-µ wall. */
+    private static void openingNotes(Opening o, double inner, Shell s, double hz, List<ValidityNote> notes) {
+        double r = o.largestDimension().toMetres() / 2;
+        double d = o.victimDistance().map(l -> l.toMetres()).orElse(inner);
+        if (r > SMALL_HOLE_LIMIT * d) {
+            notes.add(ValidityNote.of(ValidityNote.Limit.SMALL_HOLE, String.format(Locale.ROOT,
+                    "%s: Bethe's small-hole law needs the hole radius (%s) much smaller than the distance to the "
+                            + "victim (%s), r/d = %.3g here (above %s): the dipole estimate of this path is rough",
+                    o.name(), Length.ofMetres(r), Length.ofMetres(d), r / d, SMALL_HOLE_LIMIT)));
+        }
+        for (Wall w : s.walls()) {
+            if (w.medium().permeability().real(hz) >= HIGH_PERMEABILITY) {
+                notes.add(ValidityNote.of(ValidityNote.Limit.HIGH_PERMEABILITY_OPENING, o.name() + ": the wall is "
+                        + "of high permeability; a hole in it is driven by the normal field, not the tangential "
+                        + "field of the eddy-current law used, and a tube beyond it attenuates as exp(−2.405·z/a), "
+                        + "not exp(−1.841·z/a); treat this path as an order-of-magnitude estimate (see Opening)"));
+                return;
+            }
+        }
     }
 
     @Override

@@ -4,6 +4,7 @@
 package io.shieldmath.shield.enclosure;
 
 import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.model.ValidityNote;
 import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.Frequency;
 import java.util.List;
@@ -21,8 +22,11 @@ public final class EnclosureResult implements ShieldingResult {
     private final PathSum sum;
     private final double totalDb;
     private final List<LeakagePath> paths;
+    private final List<ValidityNote> notes;
 
-    EnclosureResult(Frequency frequency, PathSum sum, double totalDb, List<LeakagePath> paths) {
+    EnclosureResult(Frequency frequency, PathSum sum, double totalDb, List<LeakagePath> paths,
+                    List<ValidityNote> notes) {
+        this.notes = notes;
         this.frequency = frequency;
         this.sum = sum;
         this.totalDb = totalDb;
@@ -99,6 +103,19 @@ public final class EnclosureResult implements ShieldingResult {
             }
         }
         return w;
+    }
+
+    /**
+     * The notes on this result's validity: those of the wall model (a shell beyond the
+     * quasi-static range, a planar wall's notes), and for holes in a uniform magnetic field a
+     * hole not small against its distance to the victim ({@link ValidityNote.Limit#SMALL_HOLE})
+     * and a hole in a high-permeability wall ({@link ValidityNote.Limit#HIGH_PERMEABILITY_OPENING}).
+     *
+     * @return an unmodifiable list, empty inside the limits
+     */
+    @Override
+    public List<ValidityNote> validityNotes() {
+        return notes;
     }
 
     @Override

@@ -44,10 +44,22 @@ import java.util.Optional;
  *       attenuation. A slot or seam of length L is taken as the round hole of diameter L
  *       around it (an upper bound). Assumptions: r ≪ λ, r ≪ d (d is the shell's inner
  *       radius unless {@link #atDistance(Length)} sets it), a wall much thinner than r
- *       (else give the tube) and a wall that shields by eddy currents (t ≫ δ); for a
- *       high-permeability wall in a static field the drive is the normal rather than the
- *       tangential field and this is only an order-of-magnitude estimate.</li>
+ *       (else give the tube) and a wall that shields by eddy currents (t ≫ δ). When
+ *       r/d is above 0.2 the result carries a
+ *       {@link io.shieldmath.shield.model.ValidityNote.Limit#SMALL_HOLE} note.</li>
  * </ul>
+ *
+ * <p>High-permeability walls in a static or low-frequency field: the code uses the
+ * eddy-current law above for them too, that is the tangential-field drive (α_m = (4/3)·r³)
+ * and the tube's TE11 decay exp(−1.841·z/a) (λc = πD/1.8412, 32·l/D dB). That is not their
+ * physics: a hole in a high-µ wall is driven by the field normal to the wall (the flux the
+ * wall collects), and a high-µ tube in an axial field attenuates as exp(−2.405·z/a), the
+ * first zero of J0 (about 41.8·l/D dB; Abramowitz and Stegun, table 9.5, for the zero).
+ * So for such walls the tube's attenuation is understated by about a quarter and the hole's
+ * drive may be over- or understated by the ratio of normal to tangential field near the
+ * hole; treat the path as an order-of-magnitude estimate (±10 dB, from memory). The result
+ * carries a {@link io.shieldmath.shield.model.ValidityNote.Limit#HIGH_PERMEABILITY_OPENING}
+ * note whenever a wall's µ' is 10 or more.
  *
  * <p>Sizes: 1 µm to 100 m; count 1 to 10⁹. Immutable and thread-safe; equality is by value.
  */

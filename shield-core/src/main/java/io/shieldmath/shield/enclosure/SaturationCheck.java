@@ -21,9 +21,14 @@ import java.util.Optional;
  * B ≈ (3/2)·µ0·H0·R/t for a sphere, with D = 2R the mean diameter and t the wall
  * thickness; they are the limit µr → ∞ of a thin wall. This class reports the flux
  * density of the exact linear-µ solution instead (mean over the wall's thickness, at
- * the place where the tangential flux is largest), which tends to the hand estimate for
- * µr·t/R ≫ 1 and is lower for walls of lower µr·t/R, because part of the field then goes
- * through the cavity rather than along the wall. For an infinite cylinder along the
+ * the place where the tangential flux is largest). It tends to the hand estimate for a
+ * thin wall (t ≪ R) with µr·t/R ≫ 1, and is lower for walls of lower µr·t/R, because part
+ * of the field then goes through the cavity rather than along the wall. It can also be
+ * higher: a thick wall of high µr gathers the flux over its outer cross-section, so the
+ * exact value exceeds the hand estimate (which uses the mean radius R) by up to about
+ * (b/R)², b the outer radius (a sphere: (b/R)²; a cylinder across the field: about b/R). The
+ * hand estimates are therefore not an upper bound; this class's exact value is the one to
+ * compare with saturation. For an infinite cylinder along the
  * field the wall simply sits in the field: B = µr·µ0·H0, whatever its thickness.
  *
  * <p>The warning threshold is {@value #WARNING_FRACTION} of the saturation flux density.

@@ -5,6 +5,7 @@ package io.shieldmath.shield.enclosure;
 
 import io.shieldmath.shield.internal.Numerics;
 import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.model.ValidityNote;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.PhysicalConstants;
 import io.shieldmath.shield.quantity.RelativePermeability;
@@ -134,18 +135,33 @@ public final class ShellResult implements ShieldingResult {
     }
 
     /**
-     * Plain-text warnings about the validity of this result (empty if none).
+     * Plain-text warnings about the validity of this result (empty if none): the messages
+     * of {@link #validityNotes()}.
      *
      * @return an unmodifiable list
      */
     public List<String> warnings() {
         List<String> w = new ArrayList<>();
-        if (!isQuasiStatic()) {
-            w.add("the shell is not small against the wavelength at " + frequency + " (k0·R above "
-                    + QUASI_STATIC_LIMIT + "): the quasi-static shell model leaves out displacement currents and "
-                    + "cavity resonances; treat the result as an estimate");
+        for (ValidityNote n : validityNotes()) {
+            w.add(n.message());
         }
         return List.copyOf(w);
+    }
+
+    /**
+     * The notes on this result's validity: {@link ValidityNote.Limit#QUASI_STATIC} above
+     * k0·R = {@value #QUASI_STATIC_LIMIT}.
+     *
+     * @return an unmodifiable list, empty inside the limits
+     */
+    @Override
+    public List<ValidityNote> validityNotes() {
+        if (isQuasiStatic()) {
+            return List.of();
+        }
+        return List.of(ValidityNote.of(ValidityNote.Limit.QUASI_STATIC, "the shell is not small against the "
+                + "wavelength at " + frequency + " (k0·R above " + QUASI_STATIC_LIMIT + "): the quasi-static shell "
+                + "model leaves out displacement currents and cavity resonances; treat the result as an estimate"));
     }
 
     @Override

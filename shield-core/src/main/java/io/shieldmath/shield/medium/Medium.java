@@ -160,7 +160,10 @@ public final class Medium implements MediumSource {
     }
 
     /**
-     * The skin depth δ = 1/sqrt(π·f·µ0·|µr(f)|·σ), the good-conductor value.
+     * The skin depth δ = 1/sqrt(π·f·µ0·|µr(f)|·σ), the good-conductor value with the
+     * magnitude of µr (see {@link PermeabilityModel#skinDepth(Frequency,
+     * io.shieldmath.shield.quantity.Conductivity)}; for a lossy µr the exact decay length is
+     * {@link #exactSkinDepth(Frequency)}).
      *
      * @param frequency the frequency, not null
      * @return δ
@@ -168,6 +171,19 @@ public final class Medium implements MediumSource {
      */
     public Length skinDepth(Frequency frequency) {
         return permeability.skinDepth(frequency, conductivity);
+    }
+
+    /**
+     * The exact good-conductor skin depth δ = 1/Re(γ), γ = sqrt(jωµ0µr(f)σ), with the
+     * complex µr (see {@link PermeabilityModel#exactSkinDepth(Frequency,
+     * io.shieldmath.shield.quantity.Conductivity)}).
+     *
+     * @param frequency the frequency, not null
+     * @return δ
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the medium does not conduct
+     */
+    public Length exactSkinDepth(Frequency frequency) {
+        return permeability.exactSkinDepth(frequency, conductivity);
     }
 
     /**

@@ -3,7 +3,15 @@
  */
 package io.shieldmath.shield.planar;
 
+import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.medium.PermeabilityModel;
+import io.shieldmath.shield.model.ValidityNote;
+import io.shieldmath.shield.quantity.PhysicalConstants;
+import io.shieldmath.shield.internal.Validity;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
@@ -23,6 +31,18 @@ import io.shieldmath.shield.internal.StackArrays;
  * Schelkunoff's transmission-line view of shielding, as in Ott 2009 ch. 6). A barrier
  * of free space gives 0 dB exactly.
  *
+ * <p>Validity notes ({@link PlanarResult#validityNotes()}): with the textbook near-field
+ * impedance ({@link ImpedanceForm#TEXTBOOK}), a note where kr ≥ {@value #NEAR_FIELD_KR_LIMIT}
+ * (no longer a near field) and where |K| of a layer is below {@value #HAND_FORMULA_K_LIMIT}
+ * (the magnitude form, a real number, is unreliable beside the reactive near field; use
+ * {@link ImpedanceForm#EXACT_DIPOLE}). Here |K| is the smaller of |Zw/η|, the K of the
+ * layer's two faces, and |Zw·sinh(γt)/(2η)|, its thin-sheet form (≈ Zw·σt/2 for a layer much
+ * thinner than its skin depth, which then acts as one sheet of admittance σt); the
+ * second one catches thin foils, whose |Zw/η| can be large while the phase of Zw still
+ * decides the result. With any impedance, a note
+ * for a metal layer (σ ≥ 1e5 S/m) above 100 GHz, where its DC conductivity, which the model
+ * uses, no longer holds.
+ *
  * <p>Valid frequencies: {@value #MIN_HERTZ} Hz to {@value #MAX_HERTZ} Hz. The
  * result is finite for every layer thickness, conductivity and permeability the layer
  * types accept (thick layers are handled in log form, see the class notes of the engine).
@@ -38,6 +58,17 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
     public static final double MAX_HERTZ = 1e13;
 
     private static final FrequencyBand VALID = FrequencyBand.of(Frequency.ofHertz(MIN_HERTZ), Frequency.ofHertz(MAX_HERTZ));
+
+    /**
+     * From this kr = 2πf·r/c on, a result with the textbook near-field impedance carries a
+     * {@link ValidityNote.Limit#NOT_NEAR_FIELD} note.
+     */
+    public static final double NEAR_FIELD_KR_LIMIT = 0.3;
+    /**
+     * Below this |K| of any layer (see the class notes), a result with the textbook near-field impedance
+     * carries a {@link ValidityNote.Limit#HAND_FORMULA_IMPEDANCE} note.
+     */
+    public static final double HAND_FORMULA_K_LIMIT = 3;
 
     private final Barrier barrier;
     private final StackArrays stack;
@@ -101,7 +132,49 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
         double[] absorption = new double[n];
         System.arraycopy(parts, 2, absorption, 0, n);
         requireFinite(se, hz);
-        return new PlanarResult(frequency, field, se, absorption, parts[1], logT, parts[0]);
+        return new PlanarResult(frequency, field, se, absorption, parts[1], logT, parts[0], notes(hz));
+    }
+
+    /**
+     * The validity notes of a result (see {@link PlanarResult#validityNotes()}); built only
+     * for full results, never on the primitive paths.
+     */
+    private List<ValidityNote> notes(double hz) {
+        List<ValidityNote> out = new ArrayList<>(2);
+        if (field.form() == ImpedanceForm.TEXTBOOK) {
+            double r = field.distance().toMetres();
+            double kr = Validity.k0L(hz, r);
+            if (kr >= NEAR_FIELD_KR_LIMIT) {
+                out.add(ValidityNote.of(ValidityNote.Limit.NOT_NEAR_FIELD, String.format(Locale.ROOT,
+                        "kr = %.3g at %s (%s from the source): the field at the barrier is no longer a near field "
+                                + "and the textbook impedance, which does not tend to η0, is wrong there; use "
+                                + "ImpedanceForm.EXACT_DIPOLE", kr, Frequency.ofHertz(hz), field.distance())));
+            }
+            double zw = Math.abs(field.impedanceReal(hz));
+            double w = 2 * Math.PI * hz;
+            double smallest = Double.POSITIVE_INFINITY;
+            int which = -1;
+            for (int i = 0; i < stack.size(); i++) {
+                if (stack.gap()[i]) {
+                    continue;
+                }
+                double k = handFormulaK(zw, w, stack.mu()[i], stack.sigma()[i], stack.epsilon()[i],
+                        stack.thickness()[i], hz);
+                if (k < smallest) {
+                    smallest = k;
+                    which = i;
+                }
+            }
+            if (smallest < HAND_FORMULA_K_LIMIT) {
+                out.add(ValidityNote.of(ValidityNote.Limit.HAND_FORMULA_IMPEDANCE, String.format(Locale.ROOT,
+                        "|K| = %.3g for layer %d (below %s): with |K| this small, taking the textbook near-field "
+                                + "impedance as a real number is unreliable (the real near field is reactive), and "
+                                + "so are R and B; use ImpedanceForm.EXACT_DIPOLE", smallest, which,
+                        HAND_FORMULA_K_LIMIT)));
+            }
+        }
+        Validity.dcConductivity(hz, stack.sigma(), out);
+        return List.copyOf(out);
     }
 
     /**
@@ -187,6 +260,29 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
 
     private static double checkHertz(String what, double hz) {
         return Require.inRange(what, hz, MIN_HERTZ, MAX_HERTZ, "Hz");
+    }
+
+    /**
+     * |K| of one layer for the hand-formula check: the smaller of |Zw/η| (the two faces of a
+     * thick layer) and |Zw·sinh(γt)/(2η)| (a layer thinner than its skin depth acts as one
+     * sheet of admittance sinh(γt)/η ≈ σt, and Zw·σt/2 takes the place of K). Both from
+     * γ = sqrt(jωµ(σ + jωε)), η = jωµ/γ.
+     */
+    private static double handFormulaK(double zw, double w, PermeabilityModel m, double sigma, double epsR, double t,
+                                       double hz) {
+        org.apache.commons.math3.complex.Complex jwmu = new org.apache.commons.math3.complex.Complex(
+                w * PhysicalConstants.MU_0 * m.loss(hz), w * PhysicalConstants.MU_0 * m.real(hz));
+        org.apache.commons.math3.complex.Complex gamma = jwmu.multiply(
+                new org.apache.commons.math3.complex.Complex(sigma, w * PhysicalConstants.EPSILON_0 * epsR)).sqrt();
+        double eta = jwmu.divide(gamma).abs();
+        double faces = zw / eta;
+        double gt = gamma.getReal() * t;
+        if (gt > 20) {
+            // |sinh(γt)| > e^20/2: the sheet form is far above the faces' one.
+            return faces;
+        }
+        double sheet = zw * gamma.multiply(t).sinh().abs() / (2 * eta);
+        return Math.min(faces, sheet);
     }
 
     @Override

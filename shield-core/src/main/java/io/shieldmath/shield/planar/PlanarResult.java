@@ -8,6 +8,8 @@ import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.model.ShieldingResult;
 import io.shieldmath.shield.quantity.Complex;
 import io.shieldmath.shield.quantity.Frequency;
+import io.shieldmath.shield.model.ValidityNote;
+import java.util.List;
 import java.util.Locale;
 
 /**
@@ -47,9 +49,11 @@ public final class PlanarResult implements ShieldingResult {
     private final double reflectionDb;
     private final double logT;
     private final double phase;
+    private final List<ValidityNote> notes;
 
     PlanarResult(Frequency frequency, IncidentField field, double totalDb, double[] absorptionDb,
-                 double reflectionDb, double logT, double phase) {
+                 double reflectionDb, double logT, double phase, List<ValidityNote> notes) {
+        this.notes = notes;
         this.frequency = frequency;
         this.field = field;
         this.totalDb = totalDb;
@@ -124,7 +128,15 @@ public final class PlanarResult implements ShieldingResult {
     /**
      * The reflection loss R in dB (see the class description).
      *
-     * @return R
+     * <p>R can be negative. With a complex K (a magnetic layer, whose η has a phase other
+     * than 45° or whose µ is lossy, or a reactive wave impedance), |1 + K|² can be smaller
+     * than 4|K| where |K| is near 1: the two faces then let through more than a plain
+     * impedance step would. For example 1 mm of low-carbon steel (σ = 7 MS/m, µr ≈ 1000)
+     * 10 cm from a loop at 1 kHz, with the textbook impedance, has R ≈ −1.2 dB. That is
+     * physical, not an error of the model; it is where the hand formulas for R fail (they
+     * assume |K| ≫ 1).
+     *
+     * @return R, usually positive
      */
     public double reflectionDb() {
         return reflectionDb;
@@ -168,6 +180,17 @@ public final class PlanarResult implements ShieldingResult {
     public Complex transmission() {
         double m = Math.exp(logT);
         return Complex.ofPolar(m, phase);
+    }
+
+    /**
+     * The notes on this result's validity (see {@link PlanarEvaluation} for the checks): the
+     * textbook near-field impedance where |K| &lt; 3 or kr ≥ 0.3, and metals above 100 GHz.
+     *
+     * @return an unmodifiable list, empty inside the limits
+     */
+    @Override
+    public List<ValidityNote> validityNotes() {
+        return notes;
     }
 
     @Override

@@ -52,8 +52,9 @@ class DesignValuesTest {
         // µ' − 1 and µ'' scale by the factor, so µr = 1 stays 1 (free space stays free space).
         ScaledPermeability s = new ScaledPermeability(PermeabilityModel.relaxation(1001, Frequency.ofHertz(100)), 0.5);
         assertEquals(1 + 1000 * 0.5, s.real(0), 1e-9);
-        assertEquals(1 + (1001 / 2.0 - 1) * 0.5, s.real(100), 1e-9);     // x = 1: µ' = µdc/2
-        assertEquals(1001 / 2.0 * 0.5, s.loss(100), 1e-9);                // µ'' = µdc/2
+        // x = 1: µ' = 1 + (µdc − 1)/2 and µ'' = (µdc − 1)/2 (relaxation of the susceptibility)
+        assertEquals(1 + (1001 - 1) / 2.0 * 0.5, s.real(100), 1e-9);
+        assertEquals((1001 - 1) / 2.0 * 0.5, s.loss(100), 1e-9);
         assertEquals(1, new ScaledPermeability(PermeabilityModel.constant(1), 3).real(50), 0);
     }
 

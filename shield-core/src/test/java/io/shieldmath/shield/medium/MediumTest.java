@@ -24,27 +24,32 @@ class MediumTest {
 
     @Test
     void relaxationIsAFirstOrderLowPass() {
-        // µ(f) = µdc/(1 + j f/fc) = µdc(1 − j f/fc)/(1 + (f/fc)²), so µ' = µdc/(1 + x²), µ'' = µdc·x/(1 + x²)
-        // (first-order relaxation as in handbook permeability spectra, from memory; algebra of the first-order relaxation).
+        // µ(f) = 1 + χ/(1 + j f/fc), χ = µdc − 1 (the susceptibility relaxes, µ tends to 1): so
+        // µ' = 1 + χ/(1 + x²), µ'' = χ·x/(1 + x²) (Debye-type first-order relaxation of χ, as in
+        // Bozorth, Ferromagnetism, 1951, ch. 17, from memory; the values are its algebra).
         RelaxationPermeability m = (RelaxationPermeability) PermeabilityModel.relaxation(20_000,
                 Frequency.ofKilohertz(2));
         assertEquals(20_000, m.real(0), 0);
         assertEquals(0, m.loss(0), 0);
-        assertEquals(10_000, m.real(2000), 1e-9);     // x = 1: half in each part
-        assertEquals(10_000, m.loss(2000), 1e-9);
-        assertEquals(20_000 / 5.0, m.real(4000), 1e-9);          // x = 2
-        assertEquals(20_000 * 2 / 5.0, m.loss(4000), 1e-9);
+        assertEquals(1 + 19_999 / 2.0, m.real(2000), 1e-9);     // x = 1: half of χ in each part
+        assertEquals(19_999 / 2.0, m.loss(2000), 1e-9);
+        assertEquals(1 + 19_999 / 5.0, m.real(4000), 1e-9);      // x = 2
+        assertEquals(19_999 * 2 / 5.0, m.loss(4000), 1e-9);
+        // Far above the corner µ' tends to free space, 1, and never goes below it: at x = 1e6,
+        // µ' = 1 + 19999/(1 + 1e12) and µ'' = 19999·1e6/(1 + 1e12).
+        assertEquals(1 + 19_999 / (1 + 1e12), m.real(2e9), 1e-15);
+        assertEquals(19_999e6 / (1 + 1e12), m.loss(2e9), 1e-18);
         assertEquals(20_000, m.staticValue(), 0);
         assertEquals(20_000, m.lowFrequencyValue(), 0);
         assertEquals(Frequency.ofKilohertz(2), m.corner());
         RelativePermeability at = m.at(Frequency.ofKilohertz(2));
-        assertEquals(10_000, at.real(), 1e-9);
-        assertEquals(10_000, at.loss(), 1e-9);
+        assertEquals(10_000.5, at.real(), 1e-9);
+        assertEquals(9_999.5, at.loss(), 1e-9);
         assertEquals(m, PermeabilityModel.relaxation(20_000, Frequency.ofHertz(2000)));
         assertEquals(m.hashCode(), PermeabilityModel.relaxation(20_000, Frequency.ofHertz(2000)).hashCode());
         assertNotEquals(m, PermeabilityModel.relaxation(20_001, Frequency.ofKilohertz(2)));
         assertNotEquals(m, PermeabilityModel.relaxation(20_000, Frequency.ofKilohertz(3)));
-        assertEquals("µr 20000/(1 + j f/2 kHz)", m.toString());
+        assertEquals("µr 1 + (20000 − 1)/(1 + j f/2 kHz)", m.toString());
         // The low-frequency value is limited to [1, 1e7] (RelativePermeability.MAX).
         assertEquals(1, PermeabilityModel.relaxation(1, Frequency.ofHertz(1)).staticValue(), 0);
         assertEquals(1e7, PermeabilityModel.relaxation(1e7, Frequency.ofHertz(1)).staticValue(), 0);

@@ -64,6 +64,30 @@ class PermeabilityRangeProperties {
     }
 
     @Test
+    void relaxationNeverGoesBelowFreeSpace() {
+        // Issue 18 item 1: a relaxation of the susceptibility, µ = 1 + (µdc − 1)/(1 + j f/fc), has
+        // 1 ≤ µ' ≤ µdc and µ'' ≥ 0 at every frequency, µ' falls monotonically with frequency, and
+        // |µ − 1| = (µdc − 1)/sqrt(1 + x²) (algebra of the first-order relaxation, Bozorth 1951 ch. 17,
+        // from memory). The earlier form µdc/(1 + j f/fc) failed the first check above fc·sqrt(µdc).
+        qt().withExamples(TRIES).forAll(longs().all()).checkAssert(seed -> {
+            Random r = new Random(seed);
+            double mu = logUniform(r, 1, RelaxationPermeability.MAX_LOW_FREQUENCY);
+            double fc = logUniform(r, RelaxationPermeability.MIN_CORNER_HERTZ, RelaxationPermeability.MAX_CORNER_HERTZ);
+            PermeabilityModel m = PermeabilityModel.relaxation(mu, Frequency.ofHertz(fc));
+            double f1 = logUniform(r, 1e-6, 1e13);
+            double f2 = f1 * (1 + logUniform(r, 1e-9, 1e6));
+            for (double f : new double[] {0, f1, f2, 1e13}) {
+                assertTrue(m.real(f) >= 1 && m.real(f) <= mu, () -> "seed " + seed + ": " + m + " at " + f + " Hz");
+                assertTrue(m.loss(f) >= 0, () -> "seed " + seed);
+            }
+            assertTrue(m.real(f2) <= m.real(f1), () -> "seed " + seed + ": " + m + " rises from " + f1 + " to " + f2);
+            double x = f1 / fc;
+            double chi = Math.hypot(m.real(f1) - 1, m.loss(f1));
+            assertEquals((mu - 1) / Math.sqrt(1 + x * x), chi, 1e-12 * Math.max(1, mu), () -> "seed " + seed);
+        });
+    }
+
+    @Test
     void everyAcceptedModelIsFiniteAndInRangeAtEveryFrequency() {
         qt().withExamples(TRIES).forAll(longs().all()).checkAssert(seed -> {
             Random r = new Random(seed);
@@ -106,11 +130,12 @@ class PermeabilityRangeProperties {
                 () -> PermeabilityModel.table(new double[] {1, 10}, new double[] {5, 5}, new double[] {0, Double.NaN}));
         assertThrows(IllegalArgumentException.class, () -> PermeabilityModel.table(new double[100_001],
                 new double[100_001], new double[100_001]));
-        // The ends of the ranges are accepted and evaluate far above the corner: µ' = µdc/(1 + x²) with
-        // x = 1e13/1e-6 = 1e19 is 1e7/1e38 = 1e-31, not 0 (first-order relaxation, Bozorth 1951 ch. 17).
+        // The ends of the ranges are accepted and evaluate far above the corner: µ' = 1 + χ/(1 + x²) with
+        // χ = 1e7 − 1 and x = 1e13/1e-6 = 1e19 is 1 + 1e-31, so 1 (first-order relaxation of the
+        // susceptibility, Bozorth 1951 ch. 17, from memory), and µ'' = χ/x ≈ 1e-12, not 0.
         PermeabilityModel low = PermeabilityModel.relaxation(1e7, Frequency.ofHertz(1e-6));
-        assertEquals(1e-31, low.real(1e13), 1e-45);
-        assertEquals(1e-12, low.loss(1e13), 1e-26);
+        assertEquals(1, low.real(1e13), 0);
+        assertEquals((1e7 - 1) * 1e-19, low.loss(1e13), 1e-26);
         assertEquals(1e7, low.real(0), 0);
         assertEquals(0, low.loss(0), 0);
     }

@@ -23,8 +23,19 @@ final class ReferenceChainMatrix {
 
     /** T of the barrier between the field's wave impedance on both sides. */
     static Complex transmission(Barrier barrier, IncidentField field, double hz) {
+        return transmission(barrier, io.shieldmath.shield.TestComplex.cm(
+                field.waveImpedance(io.shieldmath.shield.quantity.Frequency.ofHertz(hz))), hz);
+    }
+
+    /** Insertion loss in dB, 20·log10|T_free/T|, between a wave impedance of the caller's on both sides. */
+    static double shieldingEffectivenessDb(Barrier barrier, Complex zw, double hz) {
+        Complex free = transmission(Barrier.of(Layer.gap(barrier.totalThickness())), zw, hz);
+        return 20 * Math.log10(free.abs() / transmission(barrier, zw, hz).abs());
+    }
+
+    /** T of the barrier between a wave impedance zw (Ω) on both sides. */
+    static Complex transmission(Barrier barrier, Complex zw, double hz) {
         double w = 2 * Math.PI * hz;
-        Complex zw = io.shieldmath.shield.TestComplex.cm(field.waveImpedance(io.shieldmath.shield.quantity.Frequency.ofHertz(hz)));
         FieldMatrix<Complex> m = identity();
         for (Layer layer : barrier.layers()) {
             m = m.multiply(layerMatrix(layer, w, hz));

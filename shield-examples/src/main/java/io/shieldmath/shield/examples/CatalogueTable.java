@@ -9,6 +9,7 @@ import io.shieldmath.shield.materials.MaterialProperty;
 import io.shieldmath.shield.materials.Provenance;
 import io.shieldmath.shield.materials.TypicalRange;
 
+import io.shieldmath.shield.medium.ApparentPermeability;
 import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.medium.RelaxationPermeability;
@@ -223,6 +224,10 @@ public final class CatalogueTable {
         if (p instanceof TabulatedPermeability t) {
             double[] hz = t.hertz();
             return "table of " + hz.length + " points";
+        }
+        if (p instanceof ApparentPermeability a) {
+            return "table of " + a.apparentTable().hertz().length + " points, apparent µ of a "
+                    + a.sheetThickness() + " sheet, converted to intrinsic";
         }
         return p.toString();
     }

@@ -7,6 +7,7 @@ import io.shieldmath.shield.field.FieldKind;
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.medium.ApparentPermeability;
 import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.PermeabilityModel;
@@ -67,8 +68,13 @@ import static io.shieldmath.shield.materials.files.JsonValues.*;
 public final class CatalogueFile {
 
     static final String CATALOGUE_FORMAT = "shield-catalogue";
-    /** The newest catalogue version: 2 adds {@code "range"} to property objects. */
-    static final int CATALOGUE_VERSION = 2;
+    /**
+     * The newest catalogue version: 2 adds {@code "range"} to property objects, 3 adds
+     * {@code "basis"} (and {@code "sheetThickness"}) to permeability objects.
+     */
+    static final int CATALOGUE_VERSION = 3;
+    /** The version from which permeability objects may hold a {@code "basis"}. */
+    static final int BASIS_VERSION = 3;
     /** The version from which property objects may hold a {@code "range"}. */
     static final int RANGE_VERSION = 2;
     static final int MAX_MATERIALS = 10_000;
@@ -151,9 +157,23 @@ public final class CatalogueFile {
      * {@code "sheetResistance": { "value": "0.5 Ω/sq", "thickness": "50 µm", "source": "..." }}.
      * Permeability models: {@code {"model": "constant", "value": "1200 - j 800"}},
      * {@code {"model": "relaxation", "lowFrequency": 60000, "corner": "2 kHz"}} for
-     * µ(f) = µdc/(1 + j·f/fc), and {@code {"model": "table", "points": [{"frequency": "10 Hz",
+     * µ(f) = 1 + (µdc − 1)/(1 + j·f/fc), and {@code {"model": "table", "points": [{"frequency": "10 Hz",
      * "real": 60000, "loss": 500}, ...]}} interpolated in log frequency; each with its
-     * {@code "source"}. Units: conductivity S/m, MS/m, % IACS; temperature coefficient
+     * {@code "source"}. The form of the relaxation is a property of the model, not of the
+     * file: files written for earlier releases, whose relaxation was µdc/(1 + j·f/fc), read
+     * the same but evaluate to the new form (the numbers change above the corner).
+     *
+     * <p>Version 3 adds {@code "basis"} to permeability objects: {@code "intrinsic"} (the
+     * material's own permeability; the default when absent, as in every earlier document)
+     * or {@code "apparent"} (the apparent permeability of a sheet, measured with its own
+     * eddy-current screening), which is allowed only for a table and needs
+     * {@code "sheetThickness"}: {@code {"model": "table", "basis": "apparent",
+     * "sheetThickness": "0.35 mm", "points": [...]}}. An apparent table is converted to the
+     * intrinsic permeability with the entry's conductivity
+     * ({@link io.shieldmath.shield.medium.ApparentPermeability}, which states the method),
+     * because the models compute the screening again; a point that has no passive intrinsic
+     * value is refused with its location. A catalogue is written as version 3 only when one
+     * of its materials has an apparent table. Units: conductivity S/m, MS/m, % IACS; temperature coefficient
      * {@code /K}, {@code 1/K}, {@code /°C} or {@code ppm/K}; density kg/m3 or g/cm3; flux
      * density T, mT, G; sheet resistance Ω/sq or mΩ/sq. Unknown fields, missing units,
      * duplicate identifiers and out-of-range values are rejected.
@@ -233,7 +253,7 @@ public final class CatalogueFile {
                 b::temperatureCoefficient, b, version, MaterialProperty.TEMPERATURE_COEFFICIENT,
                 TemperatureCoefficient::toPerKelvin);
         Node mu = f.required("permeability");
-        PermeabilityModel model = readPermeability(mu, true);
+        PermeabilityModel model = readPermeability(mu, true, version >= BASIS_VERSION, conductivityOf(f));
         Node.Fields muFields = new Node.Fields(mu);
         String muSource = source(muFields);
         at(mu, () -> b.permeability(model, muSource));
@@ -301,11 +321,36 @@ public final class CatalogueFile {
         b.range(range);
     }
 
+    /**
+     * The conductivity an apparent permeability table of this entry is converted with: the
+     * stated conductivity, or 1/(Rs·t) of a sheet resistance; null if neither can be read
+     * (the entry is then refused for that reason, at its own place).
+     */
+    private static Conductivity conductivityOf(Node.Fields f) {
+        try {
+            Node c = f.optional("conductivity");
+            if (c != null) {
+                return new Node.Fields(c).required("value").quantity(Conductivity::parse, "58 MS/m");
+            }
+            Node sheet = f.optional("sheetResistance");
+            if (sheet != null) {
+                Node.Fields v = new Node.Fields(sheet);
+                SheetResistance rs = v.required("value").quantity(SheetResistance::parse, "0.5 Ω/sq");
+                Length t = v.required("thickness").quantity(Length::parse, "50 µm");
+                return Conductivity.ofSiemensPerMetre(1 / (rs.toOhmsPerSquare() * t.toMetres()));
+            }
+        } catch (RuntimeException e) {
+            return null;
+        }
+        return null;
+    }
+
     private static String writeCatalogue(Catalogue c) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", CATALOGUE_FORMAT);
         boolean ranged = c.all().stream().anyMatch(m -> !m.ranges().isEmpty());
-        root.put("version", ranged ? RANGE_VERSION : VERSION);
+        boolean apparent = c.all().stream().anyMatch(m -> m.permeability() instanceof ApparentPermeability);
+        root.put("version", apparent ? BASIS_VERSION : ranged ? RANGE_VERSION : VERSION);
         ArrayNode list = root.putArray("materials");
         for (Material m : c.all()) {
             writeMaterial(list.addObject(), m);

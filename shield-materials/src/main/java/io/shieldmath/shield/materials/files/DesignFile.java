@@ -390,7 +390,7 @@ public final class DesignFile {
         String name = nameNode.string();
         Conductivity sigma = f.required("conductivity").quantity(Conductivity::parse, "1 MS/m");
         Node mu = f.optional("permeability");
-        PermeabilityModel model = mu == null ? ConstantPermeability.ONE : readPermeability(mu, false);
+        PermeabilityModel model = mu == null ? ConstantPermeability.ONE : readPermeability(mu, false, true, sigma);
         Node eps = f.optional("permittivity");
         RelativePermittivity epsilon = eps == null ? RelativePermittivity.ONE : permittivity(eps);
         Medium m = at(nameNode, () -> Medium.of(Require.text("medium name", name, 200), sigma, model, epsilon));

@@ -7,6 +7,7 @@ import io.shieldmath.shield.field.FieldKind;
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
+import io.shieldmath.shield.medium.ApparentPermeability;
 import io.shieldmath.shield.medium.ConstantPermeability;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.medium.PermeabilityModel;
@@ -103,12 +104,55 @@ final class JsonValues {
     }
 
     static PermeabilityModel readPermeability(Node n, boolean withSource) {
-        Node.Fields probe = n.object(Set.of("model", "value", "lowFrequency", "corner", "points", "source", "range"));
+        return readPermeability(n, withSource, true, null);
+    }
+
+    /**
+     * Reads a permeability model. {@code "basis"} says whether the values are the
+     * intrinsic permeability ({@code "intrinsic"}, the default) or the apparent
+     * permeability of a sheet ({@code "apparent"}, tables only, with {@code "sheetThickness"}),
+     * which is converted to the intrinsic one with the conductivity given.
+     *
+     * @param basisAllowed whether this document may hold {@code "basis"} (by its version)
+     * @param conductivity the material's conductivity for an apparent table, or null if the
+     *                     document gives none before the permeability
+     */
+    static PermeabilityModel readPermeability(Node n, boolean withSource, boolean basisAllowed,
+                                              Conductivity conductivity) {
+        Node.Fields probe = n.object(Set.of("model", "value", "lowFrequency", "corner", "points", "source", "range",
+                "basis", "sheetThickness"));
         Node kind = probe.required("model");
         String model = kind.string();
+        Node basisNode = probe.optional("basis");
+        boolean apparent = false;
+        if (basisNode != null) {
+            if (!basisAllowed) {
+                throw basisNode.error("\"basis\" needs version " + CatalogueFile.BASIS_VERSION
+                        + " of the catalogue format");
+            }
+            String basis = basisNode.string();
+            if (!basis.equals("intrinsic") && !basis.equals("apparent")) {
+                throw basisNode.error("unknown permeability basis \"" + basis + "\"; known: intrinsic (the "
+                        + "material's own permeability, the default), apparent (measured on a sheet of given "
+                        + "thickness, eddy-current screening included)");
+            }
+            apparent = basis.equals("apparent");
+        }
+        Node sheet = probe.optional("sheetThickness");
+        if (sheet != null && !apparent) {
+            throw sheet.error("\"sheetThickness\" belongs to an apparent permeability table (\"basis\": "
+                    + "\"apparent\")");
+        }
+        if (apparent && !model.equals("table")) {
+            throw basisNode.error("an apparent permeability already holds the sheet's own eddy-current screening, "
+                    + "which the models compute again from the conductivity; give it as a table with its "
+                    + "\"sheetThickness\" so that it is converted to the intrinsic permeability, or give the "
+                    + "intrinsic permeability");
+        }
+        Set<String> extra = apparent ? Set.of("basis", "sheetThickness") : basisNode != null ? Set.of("basis") : Set.of();
         switch (model) {
             case "constant": {
-                n.object(withSource ? Set.of("model", "value", "source", "range") : Set.of("model", "value"));
+                n.object(with(withSource ? Set.of("model", "value", "source", "range") : Set.of("model", "value"), extra));
                 Node v = probe.required("value");
                 if (v.type == Node.Type.NUMBER) {
                     double x = v.number();
@@ -117,15 +161,16 @@ final class JsonValues {
                 return v.convert(s -> PermeabilityModel.constant(RelativePermeability.parse(s)), v.string());
             }
             case "relaxation": {
-                n.object(withSource ? Set.of("model", "lowFrequency", "corner", "source", "range")
-                        : Set.of("model", "lowFrequency", "corner"));
+                n.object(with(withSource ? Set.of("model", "lowFrequency", "corner", "source", "range")
+                        : Set.of("model", "lowFrequency", "corner"), extra));
                 Node low = probe.required("lowFrequency");
                 double mu = low.number();
                 Frequency fc = probe.required("corner").quantity(Frequency::parse, "2 kHz");
                 return low.convert(s -> PermeabilityModel.relaxation(mu, fc), low.text);
             }
             case "table": {
-                n.object(withSource ? Set.of("model", "points", "source", "range") : Set.of("model", "points"));
+                n.object(with(withSource ? Set.of("model", "points", "source", "range") : Set.of("model", "points"),
+                        extra));
                 Node pts = probe.required("points");
                 List<Node> list = pts.array(1, MAX_TABLE_POINTS);
                 double[] hz = new double[list.size()];
@@ -138,11 +183,29 @@ final class JsonValues {
                     Node loss = p.optional("loss");
                     im[i] = loss == null ? 0 : loss.number();
                 }
-                return pts.convert(s -> PermeabilityModel.table(hz, re, im), "");
+                if (!apparent) {
+                    return pts.convert(s -> PermeabilityModel.table(hz, re, im), "");
+                }
+                Node t = probe.required("sheetThickness");
+                Length thickness = t.quantity(Length::parse, "0.35 mm");
+                if (conductivity == null) {
+                    throw basisNode.error("an apparent permeability table needs the material's conductivity to be "
+                            + "converted; give \"conductivity\"");
+                }
+                return pts.convert(s -> ApparentPermeability.fromTable(hz, re, im, thickness, conductivity), "");
             }
             default:
                 throw kind.error("unknown permeability model \"" + model + "\"; known: constant, relaxation, table");
         }
+    }
+
+    private static Set<String> with(Set<String> a, Set<String> b) {
+        if (b.isEmpty()) {
+            return a;
+        }
+        java.util.HashSet<String> all = new java.util.HashSet<>(a);
+        all.addAll(b);
+        return Set.copyOf(all);
     }
 
     static void number(ObjectNode o, String key, double v) {
@@ -161,21 +224,30 @@ final class JsonValues {
             o.put("model", "relaxation");
             number(o, "lowFrequency", r.lowFrequencyValue());
             o.put("corner", text(r.corner()));
+        } else if (model instanceof ApparentPermeability a) {
+            o.put("model", "table");
+            o.put("basis", "apparent");
+            o.put("sheetThickness", text(a.sheetThickness()));
+            writePoints(o, a.apparentTable());
         } else if (model instanceof TabulatedPermeability t) {
             o.put("model", "table");
-            ArrayNode pts = o.putArray("points");
-            double[] hz = t.hertz();
-            double[] re = t.realParts();
-            double[] im = t.lossParts();
-            for (int i = 0; i < hz.length; i++) {
-                ObjectNode p = pts.addObject();
-                p.put("frequency", text(Frequency.ofHertz(hz[i])));
-                number(p, "real", re[i]);
-                number(p, "loss", im[i]);
-            }
+            writePoints(o, t);
         } else {
             throw new IllegalArgumentException("cannot write a permeability model of type "
                     + model.getClass().getName() + "; files hold constant, relaxation and table models only");
+        }
+    }
+
+    private static void writePoints(ObjectNode o, TabulatedPermeability t) {
+        ArrayNode pts = o.putArray("points");
+        double[] hz = t.hertz();
+        double[] re = t.realParts();
+        double[] im = t.lossParts();
+        for (int i = 0; i < hz.length; i++) {
+            ObjectNode p = pts.addObject();
+            p.put("frequency", text(Frequency.ofHertz(hz[i])));
+            number(p, "real", re[i]);
+            number(p, "loss", im[i]);
         }
     }
 
