@@ -18,13 +18,11 @@ import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
-import org.jfree.svg.SVGGraphics2D;
-import org.jfree.svg.SVGUtils;
 
 /**
  * Plots of shielding effectiveness against frequency (log axis) for several designs,
  * with the requirement drawn as dashed black segments, written headless as PNG and SVG with
- * JFreeChart and JFreeSVG.
+ * JFreeChart, the SVG through Apache Batik (text stays text).
  */
 public final class SeChart {
 
@@ -85,9 +83,7 @@ public final class SeChart {
         int w = 1000;
         int h = 620;
         ChartUtils.saveChartAsPNG(png.toFile(), chart, w, h);
-        SVGGraphics2D g = new SVGGraphics2D(w, h);
-        chart.draw(g, new Rectangle(0, 0, w, h));
-        SVGUtils.writeToSVG(svg.toFile(), g.getSVGElement());
+        SvgOutput.write(svg, w, h, g -> chart.draw(g, new Rectangle(0, 0, w, h)));
     }
 
     /** Distinct colours that read on white. */
