@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.BufferedReader;
+import java.io.File;
 import java.io.InputStreamReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -27,7 +28,13 @@ class BatchProcessTest {
         Path design = BatchCommandTest.design(dir);
         Path err = dir.resolve("stderr.txt");
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-        Process p = new ProcessBuilder(java, "-Xmx64m", "-cp", System.getProperty("java.class.path"),
+        // The tests run on the module path: the command's module and its dependencies are on
+        // jdk.module.path, the test libraries on java.class.path. The child runs from both as a
+        // class path.
+        String modulePath = System.getProperty("jdk.module.path");
+        String classPath = (modulePath == null ? "" : modulePath + File.pathSeparator)
+                + System.getProperty("java.class.path");
+        Process p = new ProcessBuilder(java, "-Xmx64m", "-cp", classPath,
                 BatchCommand.class.getName(), "--design", design.toString(), "--band", "1 Hz to 1 MHz", "--points",
                 "100000").redirectError(err.toFile()).start();
         p.getOutputStream().close();
