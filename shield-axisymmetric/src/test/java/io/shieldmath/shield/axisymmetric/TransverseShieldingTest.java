@@ -240,4 +240,28 @@ class TransverseShieldingTest {
         assertEquals(Double.doubleToLongBits(a.shieldingEffectivenessDb(0)),
                 Double.doubleToLongBits(b.magnetostatic().shieldingEffectivenessDb()));
     }
+
+    @Test
+    void theReadmeTableReadsAsPrinted() {
+        // The numbers of the README's transverse table (invented can, µr 1000, a = 20 mm, wall
+        // 1 mm, 42 mm long, sensor cylinder 5 mm × 10 mm), so that the README cannot drift from
+        // the code. Not a physics check: those are the tests above.
+        SensorRegion region = SensorRegion.cylinder(mm(5), mm(10));
+        Body can = Body.can("can", ALLOY, mm(20), mm(1), mm(42));
+        Body open = Body.tube("tube", ALLOY, mm(20), mm(1), mm(42));
+        double[][] expected = {{27.39, 27.25, 27.41, 21.44}, {12.78, 11.67, 12.68, 2.977}};
+        Body[] bodies = {can, open};
+        for (int i = 0; i < 2; i++) {
+            TransverseFieldSolution t = Arrangement.of(bodies[i]).inUniformTransverseField().sensing(region).magnetostatic();
+            AxialFieldSolution a = Arrangement.of(bodies[i]).inUniformAxialField().sensing(region).magnetostatic();
+            double[] got = {t.shieldingFactorAt(Point.ORIGIN).value(), t.worstShieldingFactor().value(),
+                t.meanShieldingFactor().value(), a.worstShieldingFactor().value()};
+            System.out.printf(Locale.ROOT, "README %s: transverse centre %.4g, worst %.4g, mean %.4g; axial worst %.4g; %s%n",
+                    bodies[i].name(), got[0], got[1], got[2], got[3], t.worstDirection(a));
+            for (int k = 0; k < 4; k++) {
+                assertEquals(expected[i][k], got[k], 0.0005 * expected[i][k] + 0.005, "README value " + k);
+            }
+            assertEquals(FieldDirection.AXIAL, t.worstDirection(a));
+        }
+    }
 }
