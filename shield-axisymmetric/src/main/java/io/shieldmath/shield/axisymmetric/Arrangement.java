@@ -143,7 +143,7 @@ public final class Arrangement {
      * sensor at the origin until {@link TransverseFieldShielding#sensing(SensorRegion)} says
      * otherwise.
      *
-     * @return the evaluation, ready for a static field (or frequencies, if no body conducts)
+     * @return the evaluation, ready for a static field or frequencies
      */
     public TransverseFieldShielding inUniformTransverseField() {
         return new TransverseFieldShielding(this, SensorRegion.centrePoint());

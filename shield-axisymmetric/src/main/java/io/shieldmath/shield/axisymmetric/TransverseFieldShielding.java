@@ -4,6 +4,8 @@
 package io.shieldmath.shield.axisymmetric;
 
 import io.shieldmath.shield.axisymmetric.numerics.Mesh;
+import io.shieldmath.shield.axisymmetric.numerics.MeshLimitException;
+import io.shieldmath.shield.axisymmetric.numerics.TransverseEddySolve;
 import io.shieldmath.shield.axisymmetric.numerics.TransverseField;
 import io.shieldmath.shield.axisymmetric.numerics.TransverseSolve;
 import io.shieldmath.shield.internal.Require;
@@ -15,44 +17,51 @@ import io.shieldmath.shield.quantity.InvalidQuantityException;
 import java.util.Objects;
 
 /**
- * Bodies of revolution in a uniform applied field across their axis, read at a sensor region
- * on the axis. A static field is solved for any bodies; an alternating field only when no
- * body conducts (ferrites, powder cores), because eddy currents across the axis are not
- * modelled.
+ * Bodies of revolution in a uniform applied field across their axis (static or
+ * alternating), read at a sensor region on the axis.
  *
  * <pre>{@code
  * TransverseFieldShielding can = Arrangement.of(Body.can("can", alloy, mm(20), mm(1), mm(60)))
  *         .inUniformTransverseField().sensing(SensorRegion.cylinder(mm(5), mm(10)));
  * TransverseFieldSolution s = can.magnetostatic();
- * s.worstShieldingFactor();                       // the smallest H0/|H| in the sensor region
+ * s.worstShieldingFactor();                       // the smallest B0/|B| in the sensor region
  * s.worstDirection(arrangementInAxialField.magnetostatic());   // AXIAL or TRANSVERSE
+ * can.at(Hz(50)).worstShieldingFactor();          // with eddy currents
  * }</pre>
  *
- * <p>Model: with no current the field is H = −∇Φ, and a uniform field H0 across the axis is
- * the first azimuthal mode of the potential, Φ = Φ1(r, z)·cos φ. Φ1 solves the mode-one
- * energy ∫ µ[(∂Φ1/∂r)² + (∂Φ1/∂z)² + Φ1²/r²] r dr dz on the same graded (r, z) mesh as the
- * axial solve, with Φ1 = 0 on the axis and Φ1 = −H0·r on a far box of
- * {@value CoilCoupling#DEFAULT_FAR_BOUNDARY} half-extents of the geometry (the Fourier
+ * <p>Model. A uniform field across the axis is the first azimuthal mode of the 3-D field,
+ * and a body of revolution couples no other mode to it, so the problem reduces exactly to
+ * the (r, z) half-plane, solved on the same graded mesh as the axial case (the Fourier
  * finite-element method for axisymmetric domains of B. Mercier and G. Raugel, RAIRO Analyse
- * numérique 16 (1982) 405–461, and C. Bernardi, M. Dauge, Y. Maday, <i>Spectral Methods for
- * Axisymmetric Domains</i>, 1999). The applied field is exact on the mesh, so with the bodies
- * set to air the computed field is H0 to rounding. The far box leaves a truncation error of
- * order (extent/distance)³ in the factor; the tests measure it (below 1e-4 relative at the
- * default distance for a closed high-µ can).
+ * numérique 16 (1982) 405–461; C. Bernardi, M. Dauge, Y. Maday, <i>Spectral Methods for
+ * Axisymmetric Domains</i>, 1999).
+ * <ul>
+ *   <li>Statically, and at frequency when no body conducts: the magnetic scalar potential
+ *       Φ = Φ1(r, z)·cos φ, H = −∇Φ, minimising ∫ µ[(∂Φ1/∂r)² + (∂Φ1/∂z)² + Φ1²/r²] r dr dz with
+ *       Φ1 = 0 on the axis and Φ1 = −H0·r on the far box (bilinear elements; complex µr(f) for a
+ *       non-conducting body at frequency).</li>
+ *   <li>At frequency with a conducting body: the modified vector potential of C. R. I. Emson and
+ *       J. Simkin (IEEE Trans. Magn. 19 (1983) 2450) in its first mode,
+ *       A = (a_r·sin φ, (u/r)·cos φ, a_z·sin φ), with edge elements for (a_r, a_z) and nodal ones for
+ *       u, as C. G. Albert, O. Bíró and P. Lainer (arXiv:2008.13681) do for magnetostatics, gauged by
+ *       u = 0 at every node that touches no conductor. Two to three unknowns per grid node, so a
+ *       solve costs about ten times an axial one on the same mesh; a wall many skin depths thick
+ *       may need {@link #withFineness(double)} below 1 to stay within the size cap.</li>
+ * </ul>
+ * The far box lies {@value CoilCoupling#DEFAULT_FAR_BOUNDARY} half-extents of the geometry
+ * away. The applied field is exact on both discretisations, so with the bodies set to air the
+ * computed field is the applied one to rounding. The box leaves a truncation error of order
+ * (extent/distance)³ (measured: 2e-5 relative for a closed high-µ can).
  *
- * <p>Permeability: each body's µr at the frequency (µ'(0) statically); complex µr = µ' − jµ''
- * for a non-conducting body at frequency. Linear media only. The result is an estimate for
- * idealised geometry; seams, joints and the alloy's handling limit real shields, which must
- * be verified by measurement.
+ * <p>Permeability: each body's µr at the frequency (µ'(0) statically). Linear media only. The
+ * result is an estimate for idealised geometry; seams, joints and the alloy's handling limit
+ * real shields, which must be verified by measurement.
  *
  * <p>Options return a new evaluation. Immutable and thread-safe; equal evaluations give
  * bit-identical results.
  *
  * <p>This is one {@link ShieldingModel} of the library (its shielding effectiveness is the
- * worst factor over the sensor region, in dB). Its valid band is the quasi-static band, but
- * with a conducting body only 0 Hz ({@link #magnetostatic()}, or
- * {@link #shieldingEffectivenessDb(double)} at 0 Hz) is evaluated and every other frequency
- * is refused with an {@link InvalidQuantityException} naming the body.
+ * worst factor over the sensor region, in dB), so the design tools take it as it is.
  */
 public final class TransverseFieldShielding implements ShieldingModel<TransverseFieldSolution> {
 
@@ -171,9 +180,8 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
     }
 
     /**
-     * The frequencies {@link #at(Frequency)} accepts when no body conducts:
-     * {@value CoilCoupling#LOWEST_HERTZ} Hz up to the {@link #quasiStaticLimit()}. With a
-     * conducting body every frequency above 0 Hz is refused (see the class notes).
+     * The frequencies {@link #at(Frequency)} accepts: {@value CoilCoupling#LOWEST_HERTZ} Hz up
+     * to the {@link #quasiStaticLimit()}.
      *
      * @return the band
      */
@@ -183,12 +191,11 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
     }
 
     /**
-     * The result in an alternating field across the axis, for bodies that do not conduct.
+     * The result in an alternating field across the axis, eddy currents included.
      *
      * @param frequency the frequency, within {@link #validBand()}, not null
      * @return the result with its estimates
-     * @throws InvalidQuantityException if the frequency is outside the valid band, or a body
-     *                                  conducts (eddy currents across the axis are not modelled)
+     * @throws InvalidQuantityException if the frequency is outside the valid band
      * @throws MeshTooLargeException if a mesh would exceed the size cap
      * @throws ToleranceNotReachedException if a tolerance is set and cannot be met
      */
@@ -196,7 +203,7 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
     public TransverseFieldSolution at(Frequency frequency) {
         double hz = scene.checkBand("frequency", Require.nonNull("frequency", frequency).toHertz(),
                 CoilCoupling.LOWEST_HERTZ);
-        return solve(refuseConductors(hz));
+        return solve(hz);
     }
 
     /**
@@ -214,28 +221,15 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
      * The worst shielding factor over the sensor region in dB, the primitive form for design
      * tools. Besides the valid band it accepts 0 Hz, the static case.
      *
-     * @param hertz the frequency in Hz, 0 up to the quasi-static limit; only 0 if a body conducts
+     * @param hertz the frequency in Hz, 0 up to the quasi-static limit
      * @return 20·log10 of the worst factor, in dB, finite
-     * @throws InvalidQuantityException if the frequency is out of range, or above 0 Hz with a
-     *                                  conducting body
+     * @throws InvalidQuantityException if the frequency is out of range
      * @throws MeshTooLargeException if a mesh would exceed the size cap
      * @throws ToleranceNotReachedException if a tolerance is set and cannot be met
      */
     @Override
     public double shieldingEffectivenessDb(double hertz) {
-        return solve(refuseConductors(scene.checkHertz("frequency", hertz))).shieldingEffectivenessDb();
-    }
-
-    private double refuseConductors(double hz) {
-        if (hz > 0) {
-            for (Body b : arrangement.bodies()) {
-                if (b.medium().conductivity().toSiemensPerMetre() > 0) {
-                    throw new InvalidQuantityException("frequency", hz + " Hz", "0 Hz only (magnetostatic()): body '"
-                            + b.name() + "' conducts, and eddy currents in a field across the axis are not modelled");
-                }
-            }
-        }
-        return hz;
+        return solve(scene.checkHertz("frequency", hertz)).shieldingEffectivenessDb();
     }
 
     private TransverseFieldSolution solve(double hz) {
@@ -250,7 +244,24 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
 
     private TransverseField stage(double hz, double q) {
         Mesh mesh = scene.mesh(new double[] {hz}, q, farBoundary, true, maxUnknowns, toString());
+        if (hz > 0 && conducts()) {
+            try {
+                return new TransverseEddySolve(mesh, hz, false, 3 * maxUnknowns, MeshTooLargeException.MAX_BAND_ENTRIES)
+                        .uniformField();
+            } catch (MeshLimitException e) {
+                throw new MeshTooLargeException(toString(), e.unknowns, e.bandEntries, 3 * maxUnknowns, q);
+            }
+        }
         return new TransverseSolve(mesh, hz, false).uniformField();
+    }
+
+    private boolean conducts() {
+        for (Body b : arrangement.bodies()) {
+            if (b.medium().conductivity().toSiemensPerMetre() > 0) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

@@ -18,8 +18,9 @@ import java.util.Locale;
  *
  * <ul>
  *   <li>The shielding factor at a point is B0/|B| at the worst azimuth of its ring,
- *       B0/(|µr|·µ0·H0·max(√(|h_r|² + |h_z|²), |h_φ|)), B0 = µ0·H0 the applied flux density
- *       (|µr| = 1 in air, where a sensor normally sits).</li>
+ *       1/max(√(|b_r|² + |b_z|²), |b_φ|) with B = (b_r·cos φ, b_φ·sin φ, b_z·cos φ)·B0 and
+ *       B0 = µ0·H0 the applied flux density (in air, where a sensor normally sits, this is
+ *       H0/|H|).</li>
  *   <li>The worst factor over the sensor region is the smallest of these over its samples.</li>
  *   <li>The mean factor is B0 over the volume mean of |B|: around each ring the mean of
  *       √(a·cos²φ + b·sin²φ) is (2/π)·√a·E(k), k² = 1 − b/a for a ≥ b, with E the complete
@@ -64,7 +65,7 @@ public final class TransverseFieldSolution implements ShieldingResult {
             double k = Math.sqrt(1 - lo / hi);
             around = k < 1 ? 2 / Math.PI * Elliptic.secondKind(k) : 2 / Math.PI;
         }
-        return f.permeabilityModulus(r, z) * Math.sqrt(hi) * around;
+        return Math.sqrt(hi) * around;
     }
 
     private static double factor(double b, Point p, String what) {

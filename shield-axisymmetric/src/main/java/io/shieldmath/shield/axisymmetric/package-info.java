@@ -4,7 +4,7 @@
 /**
  * Finite shields of revolution: discs, annular plates, tubes, caps and cans on one axis,
  * between two coaxial coils or in a uniform axial field, solved by axisymmetric finite
- * elements; and in a static uniform field across the axis.
+ * elements; and in a uniform field across the axis.
  *
  * <pre>{@code
  * CoilPair pair = CoilPair.coaxial(Coil.loop(mm(10), 20), Coil.loop(mm(10), 20), mm(50));
@@ -56,10 +56,10 @@
  * (magnetization curves in a uniform axial field; static by Newton's method, at frequency by
  * the effective-permeability approximation); no hysteresis beyond the permeability model's
  * loss part. Bodies of revolution about the coils' axis only: a slot, a seam or an off-axis
- * hole needs a three-dimensional model. A uniform field across the axis is solved statically
- * (and at frequency for bodies that do not conduct) by
- * {@link io.shieldmath.shield.axisymmetric.TransverseFieldShielding}, as the first azimuthal
- * mode of the magnetic scalar potential; eddy currents in such a field are not modelled. A coil with a winding section
+ * hole needs a three-dimensional model. A uniform field across the axis is solved by
+ * {@link io.shieldmath.shield.axisymmetric.TransverseFieldShielding} as the first azimuthal
+ * mode: the magnetic scalar potential statically, the vector potential with eddy currents at
+ * frequency. A coil with a winding section
  * carries a uniform current density; the coils' own resistance is not modelled. Results are
  * estimates for idealised geometry: real shields are limited by seams, fasteners and the
  * alloy's handling, and must be verified by measurement.

@@ -211,7 +211,7 @@ public final class TransverseSolve {
             xi[k] += ri[k];
         }
         double after = residual(fr, fi, xr, xi, rr, ri) / fNorm;
-        return new TransverseField(this, xr, xi, before, after);
+        return new ScalarTransverseField(this, xr, xi, before, after);
     }
 
     private void substitute(double[] xr, double[] xi) {
