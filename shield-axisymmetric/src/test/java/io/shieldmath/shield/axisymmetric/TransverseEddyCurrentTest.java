@@ -105,5 +105,22 @@ class TransverseEddyCurrentTest {
         System.out.printf(Locale.ROOT, "high-µ can: transverse static %.3f dB, 50 Hz %s dB; axial 50 Hz %s dB; worse: %s%n",
                 dc, ac.worstShieldingDb(), axial.worstShieldingDb(), ac.worstDirection(axial));
         assertTrue(ac.shieldingEffectivenessDb() >= dc - ac.worstShieldingDb().estimate());
+        // The README quotes these three numbers; not a physics check (that is the line above).
+        assertEquals(54.43, dc, 0.006);
+        assertEquals(59.33, ac.shieldingEffectivenessDb(), 0.006);
+        assertEquals(57.12, axial.shieldingEffectivenessDb(), 0.006);
+        assertEquals(FieldDirection.AXIAL, ac.worstDirection(axial));
+    }
+
+    @Test
+    void equalEvaluationsGiveBitIdenticalEddyResults() {
+        // Two evaluations built from separately made equal values (EqualInputsProperties' rule).
+        TransverseFieldShielding a = Arrangement.of(Body.tube("tube", Medium.conductor("c", Conductivity.ofMegasiemensPerMetre(58), 1),
+                mm(10), mm(1), mm(40))).inUniformTransverseField();
+        TransverseFieldShielding b = Arrangement.of(Body.tube("tube", Medium.conductor("c", Conductivity.ofMegasiemensPerMetre(58), 1),
+                mm(10), mm(1), mm(40))).inUniformTransverseField();
+        assertEquals(a, b);
+        assertEquals(Double.doubleToLongBits(a.shieldingEffectivenessDb(1e3)),
+                Double.doubleToLongBits(b.at(Frequency.ofKilohertz(1)).shieldingEffectivenessDb()));
     }
 }

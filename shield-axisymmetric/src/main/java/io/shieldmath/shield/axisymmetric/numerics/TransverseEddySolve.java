@@ -3,8 +3,6 @@
  */
 package io.shieldmath.shield.axisymmetric.numerics;
 
-import io.shieldmath.shield.quantity.PhysicalConstants;
-
 /**
  * The first azimuthal mode of the magnetic vector potential with eddy currents: bodies of
  * revolution, some of them conducting, in a uniform alternating field across the axis.
@@ -87,24 +85,11 @@ public final class TransverseEddySolve {
      */
     public TransverseEddySolve(Mesh mesh, double hertz, boolean bodiesAsAir, int maxUnknowns, long maxBandEntries) {
         this.mesh = mesh;
-        double omega = 2 * Math.PI * hertz;
         int m = mesh.materials;
         nuRe = new double[m];
         nuIm = new double[m];
         wSigma = new double[m];
-        double nu0 = 1 / PhysicalConstants.MU_0;
-        for (int k = 0; k < m; k++) {
-            if (k == 0 || bodiesAsAir) {
-                nuRe[k] = nu0;
-                continue;
-            }
-            double mr = mesh.layout.mu[k].real(hertz);
-            double mi = mesh.layout.mu[k].loss(hertz);
-            double mod2 = mr * mr + mi * mi;
-            nuRe[k] = nu0 * mr / mod2;
-            nuIm[k] = nu0 * mi / mod2;
-            wSigma[k] = omega * mesh.layout.sigma[k];
-        }
+        HarmonicSolve.coefficients(mesh, hertz, bodiesAsAir, nuRe, nuIm, wSigma);
         nr = mesh.nr;
         nz = mesh.nz;
         // Nodes touching a conducting element keep their u; all others are gauged to u = 0.
