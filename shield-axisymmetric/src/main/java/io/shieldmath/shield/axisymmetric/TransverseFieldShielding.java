@@ -141,7 +141,9 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
     }
 
     /**
-     * This evaluation with another cap on the unknowns of one mesh.
+     * This evaluation with another cap on the unknowns of one mesh (grid nodes); the eddy
+     * solve, with up to three unknowns per node, is capped at three times this. Either solve
+     * is also capped at {@value MeshTooLargeException#MAX_BAND_ENTRIES} band entries.
      *
      * @param unknowns the cap, 1000 to {@value CoilCoupling#DEFAULT_MAX_UNKNOWNS}
      * @return the new evaluation; this one is unchanged

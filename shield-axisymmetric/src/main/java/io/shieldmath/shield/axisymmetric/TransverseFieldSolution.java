@@ -13,13 +13,13 @@ import java.util.Locale;
 /**
  * The finite-element result for bodies of revolution in a uniform applied field across the
  * axis, at one frequency (0 Hz for a static field). A point (r, z) of the half-plane stands
- * for the ring of all azimuths φ around the axis: the field there is
- * H = (h_r·cos φ, h_φ·sin φ, h_z·cos φ)·H0, so its magnitude varies around the ring.
+ * for the ring of all azimuths φ around the axis (φ = 0 along the applied field): the field
+ * there is B = (b_r·cos φ, b_φ·sin φ, b_z·cos φ)·B0 in cylindrical components (complex
+ * amplitudes at frequency), so its magnitude varies around the ring.
  *
  * <ul>
  *   <li>The shielding factor at a point is B0/|B| at the worst azimuth of its ring,
- *       1/max(√(|b_r|² + |b_z|²), |b_φ|) with B = (b_r·cos φ, b_φ·sin φ, b_z·cos φ)·B0 and
- *       B0 = µ0·H0 the applied flux density (in air, where a sensor normally sits, this is
+ *       1/max(√(|b_r|² + |b_z|²), |b_φ|), B0 = µ0·H0 the applied (peak) flux density (in air, where a sensor normally sits, this is
  *       H0/|H|).</li>
  *   <li>The worst factor over the sensor region is the smallest of these over its samples.</li>
  *   <li>The mean factor is B0 over the volume mean of |B|: around each ring the mean of

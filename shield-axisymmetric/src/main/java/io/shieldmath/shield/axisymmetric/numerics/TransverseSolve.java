@@ -33,9 +33,10 @@ package io.shieldmath.shield.axisymmetric.numerics;
  * surviving shape functions are ∝ r, so Φ1²/r² stays bounded and no Gauss point sits on
  * r = 0.
  *
- * <p>Solve: the matrix is µ'·K − jµ''·K' with µ' &gt; 0, so its real part is symmetric
- * positive definite and LDLᵀ without pivoting exists (see {@link HarmonicSolve}); a static
- * solve (µ'' = 0) is real and takes the real factorisation. One step of iterative
+ * <p>Solve: per element the matrix is (µ' − jµ'')·K with µ' &gt; 0 and K the element's
+ * geometric matrix, so its real part is symmetric positive definite and LDLᵀ without
+ * pivoting exists (see {@link HarmonicSolve}); a static solve (µ'' = 0) is real and takes the
+ * real factorisation. One step of iterative
  * refinement follows, as in {@link HarmonicSolve}.
  *
  * <p>Immutable after construction; one instance may serve several threads.
