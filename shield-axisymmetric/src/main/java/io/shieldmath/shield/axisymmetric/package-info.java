@@ -70,7 +70,11 @@
  * coupled-circuit model of a finite disc (after Miller and Bridges; self-inductance from the
  * geometric mean distance, F. W. Grover, <i>Inductance Calculations</i>, 1946), A. Mager's
  * capped-cylinder formula (IEEE Trans. Magn. 6 (1970) 67), and the decay of the field in a
- * long open tube with the first zeros of J0 and J1 (Abramowitz and Stegun, table 9.5).
+ * long open tube with the first zeros of J0 and J1 (Abramowitz and Stegun, table 9.5). The
+ * transverse solves are checked against the exact infinitely long cylinder across the field
+ * (static, complex µ, conducting), against J. D. Jackson's spherical shell (<i>Classical
+ * Electrodynamics</i>, 3rd ed., §5.12; a staircase of rings, both directions), and against
+ * the decay with the first zeros of J1 (high-µ wall) and J1′ (conducting wall).
  *
  * <p>Every type is immutable and thread-safe.
  */
