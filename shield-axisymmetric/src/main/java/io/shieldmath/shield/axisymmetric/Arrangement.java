@@ -138,6 +138,17 @@ public final class Arrangement {
         return new AxialFieldShielding(this, SensorRegion.centrePoint());
     }
 
+    /**
+     * These bodies in a uniform applied field across the axis (far from the bodies), with the
+     * sensor at the origin until {@link TransverseFieldShielding#sensing(SensorRegion)} says
+     * otherwise.
+     *
+     * @return the evaluation, ready for a static field or frequencies
+     */
+    public TransverseFieldShielding inUniformTransverseField() {
+        return new TransverseFieldShielding(this, SensorRegion.centrePoint());
+    }
+
     @Override
     public boolean equals(Object o) {
         return o instanceof Arrangement a && a.bodies.equals(bodies);

@@ -67,27 +67,12 @@ public final class AxialFieldSolution implements ShieldingResult {
     }
 
     private static double meanField(Field f, SensorRegion sensor) {
-        Point[] p = sensor.samples();
-        if (p.length == 1) {
-            return magnitude(f, p[0]);
-        }
-        int nr = SensorRegion.RADIAL_SAMPLES;
-        int nz = SensorRegion.AXIAL_SAMPLES;
-        double dr = sensor.radiusMetres() / (nr - 1);
-        double sum = 0;
-        double weights = 0;
-        for (int j = 0; j < nz; j++) {
-            double wz = j == 0 || j == nz - 1 ? 0.5 : 1;
-            for (int i = 0; i < nr; i++) {
-                // Ring areas: the axis sample stands for the disc of radius Δr/2 (area πΔr²/4 =
-                // 2π·(Δr/8)·Δr), the rim sample for the half ring inside the rim.
-                double wr = i == 0 ? dr / 8 : i == nr - 1 ? 0.5 * i * dr : i * dr;
-                double w = wz * wr;
-                sum += w * magnitude(f, p[i + nr * j]);
-                weights += w;
-            }
-        }
-        return sum / weights;
+        return Sampling.volumeMean(sensor, p -> magnitude(f, p));
+    }
+
+    /** The evaluation this result came from. */
+    AxialFieldShielding evaluation() {
+        return evaluation;
     }
 
     /**

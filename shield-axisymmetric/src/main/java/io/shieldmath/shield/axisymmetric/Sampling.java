@@ -4,7 +4,9 @@
 package io.shieldmath.shield.axisymmetric;
 
 import io.shieldmath.shield.axisymmetric.numerics.Field;
+import io.shieldmath.shield.axisymmetric.numerics.Mesh;
 import io.shieldmath.shield.internal.Require;
+import java.util.function.ToDoubleFunction;
 
 /** Point and grid sampling of solved fields, shared by both kinds of evaluation. */
 final class Sampling {
@@ -12,10 +14,43 @@ final class Sampling {
     private Sampling() {
     }
 
+    /**
+     * The volume mean over a sensor region of a quantity given at its sample points: samples
+     * weighted by the ring area 2πr·Δr and the trapezoid rule along z; a point region gives
+     * its one value.
+     */
+    static double volumeMean(SensorRegion sensor, ToDoubleFunction<Point> value) {
+        Point[] p = sensor.samples();
+        if (p.length == 1) {
+            return value.applyAsDouble(p[0]);
+        }
+        int nr = SensorRegion.RADIAL_SAMPLES;
+        int nz = SensorRegion.AXIAL_SAMPLES;
+        double dr = sensor.radiusMetres() / (nr - 1);
+        double sum = 0;
+        double weights = 0;
+        for (int j = 0; j < nz; j++) {
+            double wz = j == 0 || j == nz - 1 ? 0.5 : 1;
+            for (int i = 0; i < nr; i++) {
+                // Ring areas: the axis sample stands for the disc of radius Δr/2 (area πΔr²/4 =
+                // 2π·(Δr/8)·Δr), the rim sample for the half ring inside the rim.
+                double wr = i == 0 ? dr / 8 : i == nr - 1 ? 0.5 * i * dr : i * dr;
+                double w = wz * wr;
+                sum += w * value.applyAsDouble(p[i + nr * j]);
+                weights += w;
+            }
+        }
+        return sum / weights;
+    }
+
     static void checkInside(Field f, Point p) {
-        double r = f.mesh().boxRadius();
-        double z0 = f.mesh().boxLower();
-        double z1 = f.mesh().boxUpper();
+        checkInside(f.mesh(), p);
+    }
+
+    static void checkInside(Mesh mesh, Point p) {
+        double r = mesh.boxRadius();
+        double z0 = mesh.boxLower();
+        double z1 = mesh.boxUpper();
         if (p.radiusMetres() > r || p.axialMetres() < z0 || p.axialMetres() > z1) {
             throw new IllegalArgumentException("point " + p + " lies outside the solved region r ≤ " + (float) r
                     + " m, " + (float) z0 + " m ≤ z ≤ " + (float) z1 + " m");

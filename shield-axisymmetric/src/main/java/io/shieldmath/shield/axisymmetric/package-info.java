@@ -4,7 +4,7 @@
 /**
  * Finite shields of revolution: discs, annular plates, tubes, caps and cans on one axis,
  * between two coaxial coils or in a uniform axial field, solved by axisymmetric finite
- * elements.
+ * elements; and in a uniform field across the axis.
  *
  * <pre>{@code
  * CoilPair pair = CoilPair.coaxial(Coil.loop(mm(10), 20), Coil.loop(mm(10), 20), mm(50));
@@ -55,8 +55,11 @@
  * refused. Linear media, except in {@link io.shieldmath.shield.axisymmetric.SaturationStudy}
  * (magnetization curves in a uniform axial field; static by Newton's method, at frequency by
  * the effective-permeability approximation); no hysteresis beyond the permeability model's
- * loss part. Bodies of revolution about the coils' axis only: a transverse field, a slot, a
- * seam or an off-axis hole needs a three-dimensional model. A coil with a winding section
+ * loss part. Bodies of revolution about the coils' axis only: a slot, a seam or an off-axis
+ * hole needs a three-dimensional model. A uniform field across the axis is solved by
+ * {@link io.shieldmath.shield.axisymmetric.TransverseFieldShielding} as the first azimuthal
+ * mode: the magnetic scalar potential statically, the vector potential with eddy currents at
+ * frequency. A coil with a winding section
  * carries a uniform current density; the coils' own resistance is not modelled. Results are
  * estimates for idealised geometry: real shields are limited by seams, fasteners and the
  * alloy's handling, and must be verified by measurement.
@@ -67,7 +70,11 @@
  * coupled-circuit model of a finite disc (after Miller and Bridges; self-inductance from the
  * geometric mean distance, F. W. Grover, <i>Inductance Calculations</i>, 1946), A. Mager's
  * capped-cylinder formula (IEEE Trans. Magn. 6 (1970) 67), and the decay of the field in a
- * long open tube with the first zeros of J0 and J1 (Abramowitz and Stegun, table 9.5).
+ * long open tube with the first zeros of J0 and J1 (Abramowitz and Stegun, table 9.5). The
+ * transverse solves are checked against the exact infinitely long cylinder across the field
+ * (static, complex µ, conducting), against J. D. Jackson's spherical shell (<i>Classical
+ * Electrodynamics</i>, 3rd ed., §5.12; a staircase of rings, both directions), and against
+ * the decay with the first zeros of J1 (high-µ wall) and J1′ (conducting wall).
  *
  * <p>Every type is immutable and thread-safe.
  */

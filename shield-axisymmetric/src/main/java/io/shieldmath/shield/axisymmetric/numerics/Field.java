@@ -92,7 +92,8 @@ public final class Field {
         return k >= 0 ? xi[k] : 0;
     }
 
-    private static int cell(double[] lines, double x) {
+    /** The index of the grid cell holding x (the upper one on a line); shared with the transverse fields. */
+    static int cell(double[] lines, double x) {
         int lo = 0;
         int hi = lines.length - 2;
         while (lo < hi) {

@@ -85,19 +85,7 @@ public final class HarmonicSolve {
         nuRe = new double[m];
         nuIm = new double[m];
         wSigma = new double[m];
-        double nu0 = 1 / PhysicalConstants.MU_0;
-        for (int k = 0; k < m; k++) {
-            if (k == 0 || bodiesAsAir) {
-                nuRe[k] = nu0;
-                continue;
-            }
-            double mr = mesh.layout.mu[k].real(hertz);
-            double mi = mesh.layout.mu[k].loss(hertz);
-            double mod2 = mr * mr + mi * mi;
-            nuRe[k] = nu0 * mr / mod2;
-            nuIm[k] = nu0 * mi / mod2;
-            wSigma[k] = omega * mesh.layout.sigma[k];
-        }
+        coefficients(mesh, hertz, bodiesAsAir, nuRe, nuIm, wSigma);
         int n = mesh.n;
         int b = mesh.band;
         int w = b + 1;
@@ -143,6 +131,29 @@ public final class HarmonicSolve {
             return;
         }
         pivotRatio = real ? BandedLdlt.factorReal(n, b, re) : BandedLdlt.factor(n, b, re, im);
+    }
+
+    /**
+     * Each material's coefficients at a frequency: ν = 1/(µ0·µr) = (µ' + jµ'')/(µ0|µr|²) into
+     * nuRe and nuIm, and ω·σ into wSigma; air (material 0), or every body when
+     * {@code bodiesAsAir}, gets ν0 and no conductivity. Shared with {@link TransverseEddySolve}.
+     */
+    static void coefficients(Mesh mesh, double hertz, boolean bodiesAsAir, double[] nuRe, double[] nuIm,
+                             double[] wSigma) {
+        double omega = 2 * Math.PI * hertz;
+        double nu0 = 1 / PhysicalConstants.MU_0;
+        for (int k = 0; k < mesh.materials; k++) {
+            if (k == 0 || bodiesAsAir) {
+                nuRe[k] = nu0;
+                continue;
+            }
+            double mr = mesh.layout.mu[k].real(hertz);
+            double mi = mesh.layout.mu[k].loss(hertz);
+            double mod2 = mr * mr + mi * mi;
+            nuRe[k] = nu0 * mr / mod2;
+            nuIm[k] = nu0 * mi / mod2;
+            wSigma[k] = omega * mesh.layout.sigma[k];
+        }
     }
 
     /**
