@@ -94,6 +94,8 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
      *
      * @param region the region, not null
      * @return the new evaluation; this one is unchanged
+     * @throws IllegalArgumentException if the arrangement has no body and the region is a single point, so that
+     *         there is nothing of any size to mesh
      */
     public TransverseFieldShielding sensing(SensorRegion region) {
         Require.nonNull("sensor region", region);

@@ -123,6 +123,8 @@ public final class TransverseFieldSolution implements ShieldingResult {
      * The smallest shielding factor over the sensor region.
      *
      * @return S
+     * @throws ArithmeticException if the computed field at a sensor point is zero or not finite, so that the
+     *         shielding factor is not finite (not seen for a valid arrangement)
      */
     public ShieldingFactor worstShieldingFactor() {
         return ShieldingFactor.of(Math.pow(10, worstDb(fine, evaluation.sensor(), what) / 20));
@@ -133,6 +135,8 @@ public final class TransverseFieldSolution implements ShieldingResult {
      * factor over the sensor region, in dB.
      *
      * @return 20·log10(S_worst) in dB, finite
+     * @throws ArithmeticException if the computed field at a sensor point is zero or not finite, so that the
+     *         shielding factor is not finite (not seen for a valid arrangement)
      */
     @Override
     public double shieldingEffectivenessDb() {
@@ -143,6 +147,8 @@ public final class TransverseFieldSolution implements ShieldingResult {
      * The worst shielding factor as a level with its discretisation estimate.
      *
      * @return 20·log10(S_worst) in dB and its change from the coarser mesh
+     * @throws ArithmeticException if the computed field at a sensor point is zero or not finite, so that the
+     *         shielding factor is not finite (not seen for a valid arrangement)
      */
     public EstimatedValue worstShieldingDb() {
         double f = worstDb(fine, evaluation.sensor(), what);
@@ -154,6 +160,8 @@ public final class TransverseFieldSolution implements ShieldingResult {
      * The mean shielding factor over the sensor region, B0 over the volume mean of |B|.
      *
      * @return S
+     * @throws ArithmeticException if the computed field at a sensor point is zero or not finite, so that the
+     *         shielding factor is not finite (not seen for a valid arrangement)
      */
     public ShieldingFactor meanShieldingFactor() {
         return ShieldingFactor.of(factor(meanField(fine, evaluation.sensor()), Point.ORIGIN, what));
