@@ -411,8 +411,7 @@ public final class ToleranceStudy {
                 }
                 if (fm != 1 && isMagnetic(i)) {
                     double[] mu = permeability(muRe[i], muIm[i], fm);
-                    varied = varied.withPermeability(PermeabilityModel.constant(
-                            RelativePermeability.ofComplex(mu[0], mu[1])));
+                    varied = varied.withPermeability(new AtStudyFrequency(mu[0], mu[1]));
                 }
                 layers.add(ft == 1 && varied == m ? l
                         : Layer.of(varied, ft == 1 ? l.thickness() : Length.ofMetres(t[i] * ft)));
@@ -518,7 +517,7 @@ public final class ToleranceStudy {
                                 + "µr = " + Text.number(muRe[i]) + " - j " + Text.number(muIm[i]) + " at "
                                 + Frequency.ofHertz(hz);
                         range = muRe[i] >= 1 ? "µ' from 1 to " + Text.number(RelativePermeability.MAX)
-                                : "µ' above 0";
+                                : "µ' above 0 and µ'' at most " + Text.number(RelativePermeability.MAX);
                         break;
                     default:
                         what = "source distance, nominal " + field.distance();
@@ -531,6 +530,24 @@ public final class ToleranceStudy {
                         + " of " + samples + " samples to stay within " + range);
             }
             return List.copyOf(out);
+        }
+    }
+
+    /**
+     * A sample's permeability: the varied value at the study's frequency, the only frequency the
+     * sample is evaluated at. Not a {@code PermeabilityModel.constant}, whose range (µ' from
+     * 1e-6) a model's own value far above its corner may lie below; the sample keeps the
+     * nominal model's range scaled by s.
+     */
+    private record AtStudyFrequency(double real, double loss) implements PermeabilityModel {
+        @Override
+        public double real(double hertz) {
+            return real;
+        }
+
+        @Override
+        public double loss(double hertz) {
+            return loss;
         }
     }
 

@@ -57,9 +57,9 @@ class ToleranceRangeProperties {
         double sigma = r.nextInt(6) == 0 ? 0 : edgy(r, 1e-3, 1e10);
         PermeabilityModel mu = switch (r.nextInt(4)) {
             case 0 -> PermeabilityModel.constant(1);
-            case 1 -> PermeabilityModel.constant(RelativePermeability.ofComplex(edgy(r, 1e-6, RelativePermeability.MAX),
+            case 1 -> PermeabilityModel.constant(RelativePermeability.ofComplex(edgy(r, RelativePermeability.MIN, RelativePermeability.MAX),
                     r.nextBoolean() ? 0 : edgy(r, 1e-6, RelativePermeability.MAX)));
-            case 2 -> PermeabilityModel.constant(RelativePermeability.ofComplex(edgy(r, 1e-9, 0.999), edgy(r, 1e-9, 10)));
+            case 2 -> PermeabilityModel.constant(RelativePermeability.ofComplex(edgy(r, RelativePermeability.MIN, 0.999), edgy(r, 1e-9, 10)));
             default -> PermeabilityModel.relaxation(edgy(r, 1, 1e7), Frequency.ofHertz(edgy(r, 1e-6, 1e13)));
         };
         return Medium.conductor("random", Conductivity.ofSiemensPerMetre(sigma), mu);
@@ -67,7 +67,8 @@ class ToleranceRangeProperties {
 
     @Test
     void everySampleStaysInRangeAndEvaluatesFinite() {
-        qt().withExamples(TRIES).forAll(longs().all()).checkAssert(seed -> {
+        // Half the tries: each try draws 8 samples and runs a 16-sample study (about 4 ms a try).
+        qt().withExamples(Math.max(100, TRIES / 2)).forAll(longs().all()).checkAssert(seed -> {
             Random r = new Random(seed);
             int n = 1 + r.nextInt(3);
             List<Layer> layers = new ArrayList<>();
