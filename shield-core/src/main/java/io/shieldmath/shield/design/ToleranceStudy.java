@@ -413,8 +413,9 @@ public final class ToleranceStudy {
                     double[] mu = permeability(muRe[i], muIm[i], fm);
                     varied = varied.withPermeability(new AtStudyFrequency(mu[0], mu[1]));
                 }
-                layers.add(ft == 1 && varied == m ? l
-                        : Layer.of(varied, ft == 1 ? l.thickness() : Length.ofMetres(t[i] * ft)));
+                Length thickness = ft == 1 ? l.thickness() : Length.ofMetres(t[i] * ft);
+                // An air gap varies only in thickness and stays marked as a gap.
+                layers.add(varied == m ? (ft == 1 ? l : l.withThickness(thickness)) : Layer.of(varied, thickness));
             }
             IncidentField f = field;
             if (field.kind() != FieldKind.PLANE_WAVE) {

@@ -162,11 +162,12 @@ public final class RadialChain {
                     pr = 0;
                     pi = 0;
                 } else if (s2r >= 0) {
+                    // pr is 0 only when s2 is a subnormal (0.5·mod underflows): then p is 0 to within 1e-162.
                     pr = Math.sqrt(0.5 * (mod + s2r));
-                    pi = s2i / (2 * pr);
+                    pi = pr > 0 ? s2i / (2 * pr) : 0;
                 } else {
                     pi = Math.sqrt(0.5 * (mod - s2r));
-                    pr = s2i / (2 * pi);
+                    pr = pi > 0 ? s2i / (2 * pi) : 0;
                     if (pr < 0) {
                         pi = -pi;
                         pr = -pr;

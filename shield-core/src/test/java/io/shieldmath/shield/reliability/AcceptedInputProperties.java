@@ -181,6 +181,18 @@ class AcceptedInputProperties {
     }
 
     @Test
+    void casesThisPropertyFoundAreFinite() {
+        // A long cylinder in an axial field with σ = 1e-300 S/m at 1 µHz: sinh(z)/z as a quotient underflowed
+        // to 0/0 (εr = 1e6, µr = 1), and with µr = 1e-6 the square root of a subnormal p² divided by 0.
+        for (double mu : new double[] {1, 1e-6}) {
+            Medium m = Medium.of("tiny σ", Conductivity.ofSiemensPerMetre(1e-300), PermeabilityModel.constant(mu),
+                    RelativePermittivity.of(1e6));
+            Shell s = Shell.cylinderAxial(Length.ofMetres(5.69e-4)).wall(m, Length.ofMetres(6.27e-5));
+            assertTrue(Double.isFinite(s.shieldingEffectivenessDb(1e-6)), () -> "µr " + mu);
+        }
+    }
+
+    @Test
     void valuesJustOutsideTheRangesAreRefusedWhereTheyAreMade() {
         // Issue 15 item 11 regression: near-field distances of 1e-200 m and 1e100 m were accepted and
         // failed later with ArithmeticException.
