@@ -6,6 +6,7 @@ package io.shieldmath.shield.axisymmetric;
 import io.shieldmath.shield.axisymmetric.numerics.Field;
 import io.shieldmath.shield.axisymmetric.numerics.HarmonicSolve;
 import io.shieldmath.shield.axisymmetric.numerics.Mesh;
+import io.shieldmath.shield.internal.Text;
 
 /**
  * Everything one mesh gives at one frequency for a coil pair, per ampere (peak) of
@@ -69,8 +70,16 @@ final class CoilSnapshot {
         double mod = Math.hypot(mRe, mIm);
         double db = 20 * Math.log10(Math.abs(m0) / mod);
         if (!Double.isFinite(db)) {
-            throw new ArithmeticException("the insertion loss of " + what + " at " + hertz + " Hz is not finite (M = "
-                    + mRe + " + j" + mIm + " H, M0 = " + m0 + " H); check the bodies' permeability models");
+            // Name the cause from the values, and clip the description (issue 15 item 13).
+            String cause = !(Double.isFinite(mRe) && Double.isFinite(mIm))
+                    ? "the solved mutual inductance is not finite (a body's permeability model may return a value "
+                    + "outside finite µ' > 0 and µ'' >= 0)"
+                    : mod == 0 ? "the shielded mutual inductance underflowed to 0 H (the bodies screen the coils by far "
+                    + "more than the solver can resolve)"
+                    : "the free-space mutual inductance is " + Text.number(m0) + " H";
+            throw new ArithmeticException("the insertion loss of " + Text.clip(what) + " at " + Text.number(hertz)
+                    + " Hz is not finite: " + cause + " (M = " + Text.number(mRe) + " + j" + Text.number(mIm)
+                    + " H, M0 = " + Text.number(m0) + " H)");
         }
         return db;
     }

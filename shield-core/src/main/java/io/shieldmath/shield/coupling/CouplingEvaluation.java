@@ -214,10 +214,9 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
     private double lossDb(double[] out, double hz) {
         double db = Numerics.DB_PER_NEPER * (Math.log(out[3]) - Numerics.logAbs(out[0], out[1]) + out[2]);
         if (!Double.isFinite(db)) {
-            // Only a permeability model that breaks its contract (NaN, µ' ≤ 0) can get here.
-            throw new ArithmeticException("insertion loss of " + barrier + " between " + pair + " at " + hz
-                    + " Hz is not finite; check the layers' permeability models, which must return finite "
-                    + "µ' > 0 and µ'' >= 0");
+            // Only a permeability model that breaks its contract (NaN, µ' ≤ 0) should get here; say which.
+            throw Numerics.notFinite("insertion loss", barrier, hz,
+                    Numerics.permeabilityFault(stack.mu(), i -> "layer " + (i + 1), hz));
         }
         return db;
     }

@@ -5,6 +5,7 @@ package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.internal.Require;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 
 /**
@@ -18,11 +19,24 @@ public final class ToleranceResult {
     private final double mean;
     private final double standardDeviation;
     private final double probability;
+    private final long redrawn;
+    private final List<String> notes;
 
+    /** A result with no sample drawn again; takes {@code values} over (sorts it in place). */
     ToleranceResult(double nominalDb, double targetDb, double[] values) {
+        this(nominalDb, targetDb, values, 0, List.of());
+    }
+
+    /**
+     * A result; takes {@code values} over and sorts it in place, so that a run at its cap holds
+     * its values once.
+     */
+    ToleranceResult(double nominalDb, double targetDb, double[] values, long redrawn, List<String> notes) {
         this.nominalDb = nominalDb;
         this.targetDb = targetDb;
-        this.sorted = values.clone();
+        this.sorted = values;
+        this.redrawn = redrawn;
+        this.notes = List.copyOf(notes);
         Arrays.sort(sorted);
         double sum = 0;
         for (double v : sorted) {
@@ -113,6 +127,29 @@ public final class ToleranceResult {
     }
 
     /**
+     * The number of samples in which at least one property was drawn again because its first
+     * draw left its physical or documented range (see {@link ToleranceStudy}); 0 when every
+     * first draw was in range. A large count means the tolerance reaches the edge of a range
+     * and the distribution there is the spread conditioned on the range.
+     *
+     * @return from 0 to {@link #samples()}
+     */
+    public long redrawnSamples() {
+        return redrawn;
+    }
+
+    /**
+     * One sentence for each property and layer whose draws were repeated: the property, the
+     * layer, the nominal value given, the tolerance and its spread, how many samples, and the
+     * range that was kept. Empty when {@link #redrawnSamples()} is 0.
+     *
+     * @return an unmodifiable list
+     */
+    public List<String> rangeNotes() {
+        return notes;
+    }
+
+    /**
      * The sample values in increasing order.
      *
      * @return a copy
@@ -125,6 +162,7 @@ public final class ToleranceResult {
     public String toString() {
         return String.format(Locale.ROOT, "%d samples: mean %.2f dB, sd %.2f dB, 5 %% %.2f dB, 95 %% %.2f dB, "
                 + "P(SE ≥ %.1f dB) = %.3f", sorted.length, mean, standardDeviation, percentileDb(5),
-                percentileDb(95), targetDb, probability);
+                percentileDb(95), targetDb, probability)
+                + (redrawn == 0 ? "" : String.format(Locale.ROOT, "; %d samples drawn again to stay in range", redrawn));
     }
 }

@@ -5,6 +5,7 @@ package io.shieldmath.shield.enclosure;
 
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.internal.Text;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -62,16 +63,44 @@ public final class Enclosure {
     }
 
     /**
-     * This enclosure with one more opening.
+     * This enclosure with one more opening. The opening must fit the shell: one opening may
+     * not be larger than the face it sits on (for a box its largest face, sides p ≥ q: a hole
+     * up to q across, a slot up to the face's diagonal by q, a seam up to its perimeter; for a
+     * sphere its wall, 2R across: a hole or slot up to 2R, a seam up to 2πR; for a long
+     * cylinder a hole up to 2R, a slot up to 2R wide and of any length, any seam), and
+     * the open area of all openings together (holes nπD²/4, slots nLW; a seam counts no
+     * area) may not exceed the wall's inner area (2(xy + yz + zx) for a box, 4πR² for a
+     * sphere; a long cylinder has no stated length and no area limit).
      *
      * @param opening the opening, not null
      * @return the new enclosure
-     * @throws IllegalArgumentException if it would have more than {@value #MAX_OPENINGS} openings
+     * @throws NullPointerException if the opening is null
+     * @throws IllegalArgumentException if it would have more than {@value #MAX_OPENINGS} openings,
+     *         if the opening is larger than the face it sits on, or if the openings' total area
+     *         would exceed the wall's; the message names the opening, its size, the face and its size
      */
     public Enclosure withOpening(Opening opening) {
         Require.nonNull("opening", opening);
         if (openings.size() >= MAX_OPENINGS) {
             throw new IllegalArgumentException("an enclosure has at most " + MAX_OPENINGS + " openings");
+        }
+        ShellShape shape = shell.shape();
+        String misfit = shape.misfit(opening);
+        if (misfit != null) {
+            throw new IllegalArgumentException("opening \"" + Text.clip(opening.name()) + "\" ("
+                    + opening.sizeText() + ") is larger than the face it sits on: " + shape.description() + ": "
+                    + misfit);
+        }
+        double area = opening.totalArea();
+        for (Opening o : openings) {
+            area += o.totalArea();
+        }
+        if (area > shape.wallArea()) {
+            throw new IllegalArgumentException("opening \"" + Text.clip(opening.name()) + "\" ("
+                    + (opening.count() > 1 ? opening.count() + " openings of " : "") + opening.sizeText() + ", "
+                    + Text.number(opening.totalArea()) + " m² open) brings the open area of the enclosure to "
+                    + Text.number(area) + " m², more than the inner wall area of " + shape.description() + ", "
+                    + Text.number(shape.wallArea()) + " m²");
         }
         List<Opening> l = new ArrayList<>(openings);
         l.add(opening);

@@ -265,6 +265,34 @@ public final class Opening {
         return name;
     }
 
+    /** The size of one such opening in words, for messages: "diameter 4 mm", "8 cm × 1 mm", "length 8 cm". */
+    String sizeText() {
+        switch (kind) {
+            case HOLE:
+                return "diameter " + length;
+            case SLOT:
+                return length + " × " + width;
+            default:
+                return "length " + length;
+        }
+    }
+
+    /**
+     * The open area of all n openings, m²: n·πD²/4 for holes, n·L·W for a slot, and 0 for a
+     * seam, whose gap width is not known (a seam is a slot along a joint, not a cut-out).
+     */
+    double totalArea() {
+        double l = length.toMetres();
+        switch (kind) {
+            case HOLE:
+                return count * Math.PI * l * l / 4;
+            case SLOT:
+                return count * l * width.toMetres();
+            default:
+                return 0;
+        }
+    }
+
     /**
      * The aperture rule for one such opening without tube, 20·log10(λ/(2L)) for L &lt; λ/2, else 0.
      *

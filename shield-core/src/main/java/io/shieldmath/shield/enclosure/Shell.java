@@ -245,10 +245,13 @@ public final class Shell implements ShieldingModel<ShellResult> {
      * product approximations beside it.
      *
      * @return the static result
+     * @throws ArithmeticException if a wall's permeability model breaks its contract at 0 Hz (finite
+     *         µ' &gt; 0), naming the wall
      */
     public StaticShielding staticShielding() {
         double[] wallLog = new double[inner.length];
         double logS = RadialChain.logShielding(geometryCode, inner, outer, sigma, mu, 0, true, null, wallLog);
+        requireFinite(logS, 0);
         return new StaticShielding(this, logS, wallLog);
     }
 
@@ -316,9 +319,8 @@ public final class Shell implements ShieldingModel<ShellResult> {
 
     private void requireFinite(double logS, double hz) {
         if (!Double.isFinite(logS)) {
-            throw new ArithmeticException("shielding factor of " + this + " at " + hz
-                    + " Hz is not finite; check the walls' permeability models, which must return finite "
-                    + "µ' > 0 and µ'' >= 0");
+            throw Numerics.notFinite("shielding factor", this, hz, Numerics.permeabilityFault(mu,
+                    i -> "layer " + (i + 1) + " from the inside (walls and gaps)", hz));
         }
     }
 

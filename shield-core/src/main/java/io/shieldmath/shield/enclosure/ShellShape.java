@@ -31,17 +31,20 @@ public final class ShellShape {
     private final ShellGeometry geometry;
     private final Length innerRadius;
     private final String description;
+    /** A box's inner sides, shortest first, in metres; null for a sphere or a cylinder. */
+    private final double[] boxSides;
 
-    private ShellShape(ShellGeometry geometry, Length innerRadius, String description) {
+    private ShellShape(ShellGeometry geometry, Length innerRadius, String description, double[] boxSides) {
         this.geometry = geometry;
         this.innerRadius = innerRadius;
         this.description = description;
+        this.boxSides = boxSides;
     }
 
     static ShellShape of(ShellGeometry geometry, Length innerRadius) {
         Require.nonNull("geometry", geometry);
         checkRadius(innerRadius);
-        return new ShellShape(geometry, innerRadius, describe(geometry, innerRadius));
+        return new ShellShape(geometry, innerRadius, describe(geometry, innerRadius), null);
     }
 
     private static void checkRadius(Length r) {
@@ -89,8 +92,10 @@ public final class ShellShape {
                 "(plain number)");
         Length r = Length.ofMetres(max / 2);
         checkRadius(r);
+        double[] sides = {a, b, c};
+        java.util.Arrays.sort(sides);
         return new ShellShape(ShellGeometry.SPHERE, r,
-                "box " + x + " × " + y + " × " + z + " as its equivalent sphere of inner radius " + r);
+                "box " + x + " × " + y + " × " + z + " as its equivalent sphere of inner radius " + r, sides);
     }
 
     /**
@@ -131,6 +136,59 @@ public final class ShellShape {
      */
     public String description() {
         return description;
+    }
+
+    /**
+     * The inner wall area an enclosure's openings share, m²: 2(xy + yz + zx) for a box, 4πR²
+     * for a sphere, and no limit (infinity) for a long cylinder, whose length is not given.
+     */
+    double wallArea() {
+        if (boxSides != null) {
+            return 2 * (boxSides[0] * boxSides[1] + boxSides[1] * boxSides[2] + boxSides[2] * boxSides[0]);
+        }
+        double r = innerRadius.toMetres();
+        return geometry == ShellGeometry.SPHERE ? 4 * Math.PI * r * r : Double.POSITIVE_INFINITY;
+    }
+
+    /**
+     * Why one opening (of an array, the single opening) is larger than the face it sits on,
+     * or null if it fits. The largest face decides: for a box its two longer sides p ≥ q; a
+     * sphere's or a cylinder's face is its curved wall, whose straight extent across is the
+     * diameter 2R (and, along a long cylinder's axis, unbounded). A hole of diameter D fits
+     * if D ≤ q (box) or D ≤ 2R; a slot L × W if W ≤ q and L ≤ sqrt(p² + q²), the face's
+     * diagonal (box), or L, W ≤ 2R (sphere), W ≤ 2R (cylinder); a seam of length L, which
+     * runs along a joint, if L ≤ 2(p + q), the face's perimeter (box), or L ≤ 2πR (sphere).
+     */
+    String misfit(Opening o) {
+        double l = o.largestDimension().toMetres();
+        double w = o.width().map(Length::toMetres).orElse(0.0);
+        if (boxSides != null) {
+            double q = boxSides[1];
+            double p = boxSides[2];
+            String face = "its largest face, " + Length.ofMetres(p) + " × " + Length.ofMetres(q) + ",";
+            switch (o.kind()) {
+                case HOLE:
+                    return l <= q ? null : face + " holds a hole of at most " + Length.ofMetres(q) + " across";
+                case SLOT:
+                    return w <= q && l <= Math.hypot(p, q) ? null : face + " holds a slot of at most "
+                            + Length.ofMetres(Math.hypot(p, q)) + " (its diagonal) × " + Length.ofMetres(q);
+                default:
+                    return l <= 2 * (p + q) ? null : face + " has a perimeter of " + Length.ofMetres(2 * (p + q));
+            }
+        }
+        double d = 2 * innerRadius.toMetres();
+        String face = "its wall, of diameter " + Length.ofMetres(d) + ",";
+        boolean sphere = geometry == ShellGeometry.SPHERE;
+        switch (o.kind()) {
+            case HOLE:
+                return l <= d ? null : face + " holds a hole of at most " + Length.ofMetres(d) + " across";
+            case SLOT:
+                return w <= d && (!sphere || l <= d) ? null : face + " holds a slot of at most "
+                        + (sphere ? Length.ofMetres(d) + " × " : "any length × ") + Length.ofMetres(d);
+            default:
+                return !sphere || l <= Math.PI * d ? null : face + " has a circumference of "
+                        + Length.ofMetres(Math.PI * d);
+        }
     }
 
     @Override

@@ -20,9 +20,20 @@ import io.shieldmath.shield.quantity.Complex;
  * IncidentField loop = IncidentField.magneticNearField(Length.ofCentimetres(5), ImpedanceForm.TEXTBOOK);
  * }</pre>
  *
+ * <p>Near-field source distance: {@value #MIN_DISTANCE_METRES} m to
+ * {@value #MAX_DISTANCE_METRES} m (1 µm to 1000 km), refused outside it where the field is
+ * made, so that the wave impedance and every evaluation of a barrier in the field are
+ * finite at every frequency the models accept. A dipole source closer than its own size is
+ * outside the near-field forms anyway (common practice, no source).
+ *
  * <p>Immutable and thread-safe; equality is by value.
  */
 public final class IncidentField {
+
+    /** The smallest near-field source distance, in metres (1 µm). */
+    public static final double MIN_DISTANCE_METRES = 1e-6;
+    /** The largest near-field source distance, in metres (1000 km). */
+    public static final double MAX_DISTANCE_METRES = 1e6;
 
     private static final IncidentField PLANE_WAVE = new IncidentField(FieldKind.PLANE_WAVE, null, null);
 
@@ -48,25 +59,35 @@ public final class IncidentField {
     /**
      * The near field of a magnetic (loop) source at distance r from the barrier.
      *
-     * @param distance the source-to-barrier distance r, not null
+     * @param distance the source-to-barrier distance r, from 1 µm to 1000 km, not null
      * @param form     which wave impedance to use, not null
      * @return the field
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the distance is out of range
      */
     public static IncidentField magneticNearField(Length distance, ImpedanceForm form) {
-        return new IncidentField(FieldKind.MAGNETIC_NEAR_FIELD, Require.nonNull("distance", distance),
+        return new IncidentField(FieldKind.MAGNETIC_NEAR_FIELD, checked(distance),
                 Require.nonNull("impedance form", form));
     }
 
     /**
      * The near field of an electric (rod) source at distance r from the barrier.
      *
-     * @param distance the source-to-barrier distance r, not null
+     * @param distance the source-to-barrier distance r, from 1 µm to 1000 km, not null
      * @param form     which wave impedance to use, not null
      * @return the field
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the distance is out of range
      */
     public static IncidentField electricNearField(Length distance, ImpedanceForm form) {
-        return new IncidentField(FieldKind.ELECTRIC_NEAR_FIELD, Require.nonNull("distance", distance),
+        return new IncidentField(FieldKind.ELECTRIC_NEAR_FIELD, checked(distance),
                 Require.nonNull("impedance form", form));
+    }
+
+    private static Length checked(Length distance) {
+        Require.inRange("near-field source distance", Require.nonNull("distance", distance).toMetres(),
+                MIN_DISTANCE_METRES, MAX_DISTANCE_METRES, "m");
+        return distance;
     }
 
     /**

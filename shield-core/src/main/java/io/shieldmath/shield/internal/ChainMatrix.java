@@ -90,8 +90,13 @@ public final class ChainMatrix {
         final int n = t.length;
         for (int i = 0; i < n; i++) {
             // jωµ = ωµ0µ'' + j ωµ0µ'   (µr = µ' − jµ'')
-            final double p = wMu0 * mu[i].loss(hz);
-            final double q = wMu0 * mu[i].real(hz);
+            final double mLoss = mu[i].loss(hz);
+            final double mReal = mu[i].real(hz);
+            if (Numerics.breaksContract(mReal, mLoss)) {
+                return Double.NaN;      // a user model outside finite µ' > 0, µ'' ≥ 0: the caller names it
+            }
+            final double p = wMu0 * mLoss;
+            final double q = wMu0 * mReal;
             final double s = sigma[i];
             final double we = wEps0 * eps[i];
             // γ² = jωµ·(σ + jωε); its imaginary part is ≥ 0 for a passive medium.

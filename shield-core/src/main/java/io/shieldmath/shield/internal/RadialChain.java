@@ -123,6 +123,9 @@ public final class RadialChain {
             // Complex relative permeability µ' − jµ''.
             final double mr = staticField ? mu[layer].staticValue() : mu[layer].real(hz);
             final double mi = staticField ? 0 : -mu[layer].loss(hz);
+            if (Numerics.breaksContract(mr, -mi)) {
+                return Double.NaN;      // a user model outside finite µ' > 0, µ'' ≥ 0: the caller names it
+            }
             // kk = jωµ0σ (the k² per unit µr) and k² = kk·µr.
             final double kkI = staticField ? 0 : omega * PhysicalConstants.MU_0 * sigma[layer];
             final double k2r = -kkI * mi;
@@ -159,11 +162,12 @@ public final class RadialChain {
                     pr = 0;
                     pi = 0;
                 } else if (s2r >= 0) {
+                    // pr is 0 only when s2 is a subnormal (0.5·mod underflows): then p is 0 to within 1e-162.
                     pr = Math.sqrt(0.5 * (mod + s2r));
-                    pi = s2i / (2 * pr);
+                    pi = pr > 0 ? s2i / (2 * pr) : 0;
                 } else {
                     pi = Math.sqrt(0.5 * (mod - s2r));
-                    pr = s2i / (2 * pi);
+                    pr = pi > 0 ? s2i / (2 * pi) : 0;
                     if (pr < 0) {
                         pi = -pi;
                         pr = -pr;
@@ -195,9 +199,12 @@ public final class RadialChain {
                 double m00r, m00i, m01r, m01i, m10r, m10i, m11r, m11i;
                 if (geometry == CYLINDER_AXIAL) {
                     double scr, sci;
-                    if (zr == 0 && zi == 0) {
-                        scr = 1;
-                        sci = 0;
+                    if (Math.abs(zr) + Math.abs(zi) < 1e-4) {
+                        // Series sinh(z)/z = 1 + z²/6 + z⁴/120 + …, the z⁴ term below 1e-18: the quotient
+                        // below would lose |z|² to underflow (0/0 for |z| under 1e-154, a conductivity of
+                        // 1e-300 S/m at 1 µHz, issue 15 item 11).
+                        scr = 1 + (zr * zr - zi * zi) / 6;
+                        sci = zr * zi / 3;
                     } else {
                         final double zz = zr * zr + zi * zi;
                         scr = (shr * zr + shi * zi) / zz;

@@ -84,6 +84,11 @@ public final class SpectralChain {
         for (int i = 0; i < n; i++) {
             double mr = mu[i].real(hz);
             double ml = mu[i].loss(hz);
+            if (Numerics.breaksContract(mr, ml)) {
+                // A user model outside finite µ' > 0, µ'' ≥ 0: a NaN sum, which the caller names.
+                java.util.Arrays.fill(out, 0, 4, Double.NaN);
+                return;
+            }
             // jωµσ = ωµ0σ·(µ'' + jµ')
             double kr = wMu0 * sigma[i] * ml;
             double ki = wMu0 * sigma[i] * mr;

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.medium;
 
+import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.quantity.RelativePermeability;
 
@@ -28,10 +29,16 @@ public final class ConstantPermeability implements PermeabilityModel {
     /**
      * Obtains the model.
      *
-     * @param value the permeability, not null
+     * @param value the permeability, not null, with µ' from {@value RelativePermeability#MIN} to
+     *              {@value RelativePermeability#MAX}
      * @return the model
+     * @throws NullPointerException if the value is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µ' is below
+     *         {@value RelativePermeability#MIN}
      */
     public static ConstantPermeability of(RelativePermeability value) {
+        Require.inRange("constant relative permeability (real part)", Require.nonNull("permeability", value).real(),
+                RelativePermeability.MIN, RelativePermeability.MAX, "(relative)");
         return value.equals(RelativePermeability.ONE) ? ONE : new ConstantPermeability(value);
     }
 

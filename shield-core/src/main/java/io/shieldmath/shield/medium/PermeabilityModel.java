@@ -70,8 +70,9 @@ public interface PermeabilityModel {
     /**
      * A permeability that does not change with frequency.
      *
-     * @param mu the permeability, not null
+     * @param mu the permeability, not null, with µ' from 1e-6 to 1e7
      * @return the model
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µ' is below 1e-6
      */
     static PermeabilityModel constant(RelativePermeability mu) {
         return ConstantPermeability.of(Require.nonNull("permeability", mu));
@@ -80,7 +81,7 @@ public interface PermeabilityModel {
     /**
      * A real permeability that does not change with frequency.
      *
-     * @param mu µr, finite and greater than 0
+     * @param mu µr, from 1e-6 to 1e7
      * @return the model
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if µr is out of range
      */
@@ -110,7 +111,7 @@ public interface PermeabilityModel {
      *
      * @param hertz the frequencies in Hz, finite, greater than 0 and strictly increasing; 1 to
      *              100 000 of them
-     * @param real  µ' at each frequency, greater than 0 and at most 1e7
+     * @param real  µ' at each frequency, from 1e-6 to 1e7
      * @param loss  µ'' at each frequency, from 0 to 1e7
      * @return the model (the arrays are copied)
      * @throws io.shieldmath.shield.quantity.InvalidQuantityException if a value is out of range or the

@@ -17,8 +17,8 @@ import java.util.Arrays;
  * give points up to the highest frequency you evaluate).
  *
  * <p>Ranges: 1 to {@value #MAX_POINTS} points; frequencies finite, greater than 0 and strictly
- * increasing; at every point µ' greater than 0 and at most {@code RelativePermeability.MAX}
- * (1e7), µ'' from 0 to 1e7, so every interpolated value is in range too.
+ * increasing; at every point µ' from {@code RelativePermeability.MIN} (1e-6) to
+ * {@code RelativePermeability.MAX} (1e7), µ'' from 0 to 1e7, so every interpolated value is in range too.
  *
  * <p>Immutable and thread-safe; equality is by value.
  */
@@ -52,7 +52,8 @@ public final class TabulatedPermeability implements PermeabilityModel {
         for (int i = 0; i < hertz.length; i++) {
             Require.positive("permeability table frequency [" + i + "]", this.hertz[i], "Hz");
             Require.positive("permeability table real part [" + i + "]", this.real[i], "(relative)");
-            Require.inRange("permeability table real part [" + i + "]", this.real[i], 0, RelativePermeability.MAX,
+            Require.inRange("permeability table real part [" + i + "]", this.real[i], RelativePermeability.MIN,
+                    RelativePermeability.MAX,
                     "(relative)");
             Require.nonNegative("permeability table loss part [" + i + "]", this.loss[i], "(relative)");
             Require.inRange("permeability table loss part [" + i + "]", this.loss[i], 0, RelativePermeability.MAX,

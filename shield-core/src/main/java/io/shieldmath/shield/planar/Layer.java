@@ -17,6 +17,11 @@ import io.shieldmath.shield.quantity.SheetResistance;
  */
 public final class Layer {
 
+    /** The smallest layer thickness, in metres (1 pm). */
+    public static final double MIN_THICKNESS_METRES = 1e-12;
+    /** The largest layer thickness, in metres. */
+    public static final double MAX_THICKNESS_METRES = 100;
+
     /** The thickness given to a film known only by its sheet resistance: 1 µm. */
     public static final Length NOMINAL_FILM_THICKNESS = Length.ofMicrometres(1);
 
@@ -45,7 +50,7 @@ public final class Layer {
     private static Layer make(MediumSource medium, Length thickness, boolean gap) {
         Medium m = Require.nonNull("medium", Require.nonNull("medium", medium).medium());
         Require.nonNull("thickness", thickness);
-        Require.inRange("layer thickness", thickness.toMetres(), 1e-12, 100, "m");
+        Require.inRange("layer thickness", thickness.toMetres(), MIN_THICKNESS_METRES, MAX_THICKNESS_METRES, "m");
         return new Layer(m, thickness, gap);
     }
 

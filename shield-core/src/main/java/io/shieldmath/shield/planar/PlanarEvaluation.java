@@ -251,10 +251,10 @@ public final class PlanarEvaluation implements ShieldingModel<PlanarResult> {
 
     private void requireFinite(double se, double hz) {
         if (!Double.isFinite(se)) {
-            // Only a permeability model that breaks its contract (NaN, µ' ≤ 0) can get here.
-            throw new ArithmeticException("shielding effectiveness of " + barrier + " at " + hz
-                    + " Hz is not finite; check the layers' permeability models, which must return finite "
-                    + "µ' > 0 and µ'' >= 0");
+            // Only a permeability model that breaks its contract (NaN, µ' ≤ 0) should get here; say which.
+            // (The wave impedance is finite for every field the field types accept: IncidentField's ranges.)
+            throw Numerics.notFinite("shielding effectiveness", barrier, hz,
+                    Numerics.permeabilityFault(stack.mu(), i -> "layer " + (i + 1), hz));
         }
     }
 

@@ -25,6 +25,16 @@ public final class RelativePermeability {
      */
     public static final double MAX = 1e7;
 
+    /**
+     * The smallest real part a constant or tabulated permeability model accepts, 1e-6: far
+     * below µ' of any material the models of this library describe (superconductors, µ' → 0,
+     * are not among them; common practice, no source), and large enough that every model
+     * evaluates it without underflow (a constant µ' of 1e-300 made the layer's impedance 0/0
+     * in the planar and coil engines; issue 15 item 11). A value itself, such as a model's
+     * value far above its corner frequency, may be smaller.
+     */
+    public static final double MIN = 1e-6;
+
     /** The permeability of free space and of non-magnetic materials, µr = 1. */
     public static final RelativePermeability ONE = new RelativePermeability(1, 0);
 

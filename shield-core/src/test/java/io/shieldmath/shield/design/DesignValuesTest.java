@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.design;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -48,14 +49,12 @@ class DesignValuesTest {
     private static final FrequencyBand BAND = FrequencyBand.parse("50 Hz to 10 kHz");
 
     @Test
-    void scaledPermeabilityScalesTheExcessOverOneAndTheLoss() {
-        // µ' − 1 and µ'' scale by the factor, so µr = 1 stays 1 (free space stays free space).
-        ScaledPermeability s = new ScaledPermeability(PermeabilityModel.relaxation(1001, Frequency.ofHertz(100)), 0.5);
-        assertEquals(1 + 1000 * 0.5, s.real(0), 1e-9);
-        // x = 1: µ' = 1 + (µdc − 1)/2 and µ'' = (µdc − 1)/2 (relaxation of the susceptibility)
-        assertEquals(1 + (1001 - 1) / 2.0 * 0.5, s.real(100), 1e-9);
-        assertEquals((1001 - 1) / 2.0 * 0.5, s.loss(100), 1e-9);
-        assertEquals(1, new ScaledPermeability(PermeabilityModel.constant(1), 3).real(50), 0);
+    void variedPermeabilityScalesTheMagnetisationOrTheWholeValueBelowOne() {
+        // The documented rule of ToleranceStudy (hand values): µ' ≥ 1 scales µ' − 1 and µ''; below 1 the
+        // whole µr scales, so µ' stays above 0 (the old rule gave 1 + (0.004 − 1)·1.2 = −0.195).
+        assertArrayEquals(new double[] {1 + 1000 * 0.5, 20 * 0.5}, ToleranceStudy.permeability(1001, 20, 0.5), 1e-12);
+        assertArrayEquals(new double[] {1, 0}, ToleranceStudy.permeability(1, 0, 3), 0);
+        assertArrayEquals(new double[] {0.004 * 1.2, 2 * 1.2}, ToleranceStudy.permeability(0.004, 2, 1.2), 1e-15);
     }
 
     @Test

@@ -85,6 +85,26 @@ class EnclosureProperties {
         return o;
     }
 
+    /**
+     * A random opening that fits the enclosure (no larger than the face it sits on, open area
+     * within the wall's; openings that do not fit are refused by {@link Enclosure#withOpening}
+     * and drawn again here), or a 0.1 mm hole if none of 100 draws fits.
+     */
+    static Opening randomOpening(Random r, Enclosure e) {
+        ShellShape shape = e.shell().shape();
+        double open = 0;
+        for (Opening o : e.openings()) {
+            open += o.totalArea();
+        }
+        for (int k = 0; k < 100; k++) {
+            Opening o = randomOpening(r);
+            if (shape.misfit(o) == null && open + o.totalArea() <= shape.wallArea()) {
+                return o;
+            }
+        }
+        return Opening.hole(Length.ofMetres(1e-4));
+    }
+
     static EnclosureResult evaluate(Enclosure e, Random r, double hz) {
         switch (r.nextInt(4)) {
             case 0:
@@ -109,9 +129,9 @@ class EnclosureProperties {
             }
             int n = r.nextInt(4);
             for (int i = 0; i < n; i++) {
-                e = e.withOpening(randomOpening(r));
+                e = e.withOpening(randomOpening(r, e));
             }
-            Enclosure more = e.withOpening(randomOpening(r));
+            Enclosure more = e.withOpening(randomOpening(r, e));
             double hz = logUniform(r, 1, 1e10);
             long mode = r.nextLong();
             EnclosureResult before = evaluate(e, new Random(mode), hz);

@@ -35,7 +35,7 @@ class PermeabilityRangeProperties {
     static PermeabilityModel anyModel(Random r) {
         switch (r.nextInt(3)) {
             case 0: {
-                double re = r.nextInt(5) == 0 ? RelativePermeability.MAX : logUniform(r, 1e-300, RelativePermeability.MAX);
+                double re = r.nextInt(5) == 0 ? RelativePermeability.MAX : logUniform(r, RelativePermeability.MIN, RelativePermeability.MAX);
                 double im = r.nextInt(3) == 0 ? 0 : logUniform(r, 1e-300, RelativePermeability.MAX);
                 return PermeabilityModel.constant(RelativePermeability.ofComplex(re, im));
             }
@@ -55,7 +55,7 @@ class PermeabilityRangeProperties {
                 for (int i = 0; i < n; i++) {
                     hz[i] = f;
                     f *= 1 + logUniform(r, 1e-12, 1e3);
-                    re[i] = logUniform(r, 1e-300, RelativePermeability.MAX);
+                    re[i] = logUniform(r, RelativePermeability.MIN, RelativePermeability.MAX);
                     im[i] = r.nextBoolean() ? 0 : logUniform(r, 1e-300, RelativePermeability.MAX);
                 }
                 return PermeabilityModel.table(hz, re, im);

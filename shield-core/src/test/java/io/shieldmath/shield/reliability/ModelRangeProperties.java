@@ -74,11 +74,15 @@ class ModelRangeProperties {
         qt().withExamples(TRIES).forAll(longs().all()).checkAssert(seed -> {
             Random r = new Random(seed);
             double side = logUniform(r, 0.01, 3);
-            Shell shell = Shell.box(Length.ofMetres(side), Length.ofMetres(side * (0.5 + r.nextDouble())),
-                    Length.ofMetres(side * (0.5 + r.nextDouble()))).wall(medium(r),
+            double y = side * (0.5 + r.nextDouble());
+            double z = side * (0.5 + r.nextDouble());
+            double shortest = Math.min(side, Math.min(y, z));
+            Shell shell = Shell.box(Length.ofMetres(side), Length.ofMetres(y), Length.ofMetres(z)).wall(medium(r),
                     Length.ofMetres(logUniform(r, 1e-6, 0.01)));
+            // Holes up to a tenth of the shortest side, at most 500: their area, at most 500·π/400 = 3.9 times
+            // the shortest side squared, stays within the box's wall area, at least 6 times it.
             Enclosure e = Enclosure.of(shell)
-                    .withOpening(Opening.holes(Length.ofMetres(side * logUniform(r, 1e-3, 0.1)), 1 + r.nextInt(500)))
+                    .withOpening(Opening.holes(Length.ofMetres(shortest * logUniform(r, 1e-3, 0.1)), 1 + r.nextInt(500)))
                     .withOpening(Opening.seam(Length.ofMetres(side * logUniform(r, 1e-2, 1))));
             double hz = logUniform(r, 1e-3, 1e10);
             EnclosureResult res = r.nextBoolean() ? e.inUniformField().at(Frequency.ofHertz(hz))

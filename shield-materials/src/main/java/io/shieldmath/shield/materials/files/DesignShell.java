@@ -116,7 +116,8 @@ public final class DesignShell {
      *
      * @param opening the opening, not null
      * @return the new shell; this one is unchanged
-     * @throws IllegalArgumentException if there would be more than {@value Enclosure#MAX_OPENINGS} openings
+     * @throws IllegalArgumentException if there would be more than {@value Enclosure#MAX_OPENINGS} openings,
+     *         or the opening does not fit the shell ({@link Enclosure#withOpening(Opening)})
      */
     public DesignShell withOpening(Opening opening) {
         Require.nonNull("opening", opening);

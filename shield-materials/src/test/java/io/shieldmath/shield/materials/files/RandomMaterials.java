@@ -255,10 +255,13 @@ final class RandomMaterials {
                     DesignShell.Form.CYLINDER_AXIAL};
             s = DesignShell.round(round[r.nextInt(3)], a, walls);
         }
+        // Openings fit the shell (Enclosure.withOpening refuses the others): sizes 2e-3·a (20 µm and up, so a
+        // slot's width of 0.05 times its length stays above 1 µm) to 0.05·a, at most
+        // 3 arrays of 200 holes, 1.2·a² open at most, below the smallest wall area, 6·(0.6·a)² = 2.2·a².
         for (int i = r.nextInt(4); i > 0; i--) {
-            Length l = Length.ofMetres(logUniform(r, 1e-4, 0.05));
+            Length l = Length.ofMetres(a.toMetres() * logUniform(r, 2e-3, 0.05));
             io.shieldmath.shield.enclosure.Opening o = switch (r.nextInt(3)) {
-                case 0 -> io.shieldmath.shield.enclosure.Opening.holes(l, 1 + r.nextInt(1000));
+                case 0 -> io.shieldmath.shield.enclosure.Opening.holes(l, 1 + r.nextInt(200));
                 case 1 -> io.shieldmath.shield.enclosure.Opening.slot(l, Length.ofMetres(l.toMetres() * r.nextDouble()
                         * 0.9 + l.toMetres() * 0.05));
                 default -> io.shieldmath.shield.enclosure.Opening.seam(l);
