@@ -72,20 +72,31 @@ public final class CouplingEvaluation implements ShieldingModel<CouplingResult> 
         // The arrays the barrier already holds (one copy per barrier, checked once).
         stack = StackAccess.ofBarrier(barrier);
         // A barrier that fills the whole gap of a flat loop touches it (r = 0); the estimate then
-        // puts the source a thousandth of the gap away, as the impedance 2πfµ0·r needs r > 0.
-        double r = Math.max(transmitterToBarrier, 1e-3 * pair.gap().toMetres());
+        // puts the source a thousandth of the gap away (at least 1 µm, the near field's range), as
+        // the impedance 2πfµ0·r needs r > 0.
+        double r = estimateDistance(transmitterToBarrier, pair);
         planar = barrier.facing(IncidentField.magneticNearField(Length.ofMetres(r), ImpedanceForm.TEXTBOOK));
     }
 
     /**
      * The distance from the transmitter's centre plane to the barrier's near face, as placed
      * by {@link CoilPair#through(Barrier)} (centred in the gap) or
-     * {@link CoilPair#through(Barrier, Length)}. It does not change the exact result.
+     * {@link CoilPair#through(Barrier, Length)}, and the source distance of the planar
+     * estimate; a barrier that touches the transmitter counts as a thousandth of the gap away,
+     * and never less than 1 µm. It does not change the exact result.
      *
      * @return the distance
      */
     public Length transmitterToBarrier() {
-        return Length.ofMetres(Math.max(position, 1e-3 * pair.gap().toMetres()));
+        return Length.ofMetres(estimateDistance(position, pair));
+    }
+
+    /**
+     * The source distance of the planar estimate: the plate's position, at least a thousandth
+     * of the gap, and never below the near field's smallest distance, 1 µm.
+     */
+    private static double estimateDistance(double position, CoilPair pair) {
+        return Math.max(Math.max(position, 1e-3 * pair.gap().toMetres()), IncidentField.MIN_DISTANCE_METRES);
     }
 
     /**
