@@ -17,6 +17,7 @@ import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.Density;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
+import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import io.shieldmath.shield.quantity.RelativePermeability;
@@ -410,7 +411,8 @@ public final class DesignFile {
                 return IncidentField.planeWave();
             case "magnetic-near-field":
             case "electric-near-field": {
-                Length r = f.required("distance").quantity(Length::parse, "6 cm");
+                Node distanceNode = f.required("distance");
+                Length r = distanceNode.quantity(Length::parse, "6 cm");
                 Node formNode = f.required("impedance");
                 String form = formNode.string();
                 ImpedanceForm fm;
@@ -421,8 +423,13 @@ public final class DesignFile {
                 } else {
                     throw formNode.error("unknown impedance form \"" + form + "\"; known: textbook, exact-dipole");
                 }
-                return kind.startsWith("magnetic") ? IncidentField.magneticNearField(r, fm)
-                        : IncidentField.electricNearField(r, fm);
+                try {
+                    return kind.startsWith("magnetic") ? IncidentField.magneticNearField(r, fm)
+                            : IncidentField.electricNearField(r, fm);
+                } catch (InvalidQuantityException e) {
+                    // A length the grammar reads but the near field refuses (below 1 µm or above 1000 km).
+                    throw distanceNode.error(e.getMessage());
+                }
             }
             default:
                 throw kindNode.error("unknown field kind \"" + kind
