@@ -77,13 +77,13 @@ public final class AxisymmetricDesign {
                                Length separation, CurrentAmplitude drive,
                                AmplitudeMeasure driveMeasure, DesignSensor sensor, MagneticFluxDensity applied,
                                Decibels tolerance, FrequencyBand band, int points, Requirement requirement,
-                               Spelling spelling, Arrangement arrangement) {
+                               Spelling spelling, Arrangement arrangement, CoilPair coils, ShieldingModel<?> model) {
         this.title = title;
         this.bodies = bodies;
         this.transmitter = transmitter;
         this.receiver = receiver;
         this.separation = separation;
-        this.coils = transmitter == null ? null
+        this.coils = coils != null || transmitter == null ? coils
                 : CoilPair.coaxial(transmitter.coil(), receiver.coil(), separation);
         this.drive = drive;
         this.driveMeasure = driveMeasure;
@@ -95,7 +95,8 @@ public final class AxisymmetricDesign {
         this.requirement = requirement;
         this.spelling = spelling;
         this.arrangement = arrangement;
-        this.model = buildModel();
+        // A copy that changes only what the solver does not see keeps the model already built.
+        this.model = model != null ? model : buildModel();
     }
 
     private ShieldingModel<?> buildModel() {
@@ -147,7 +148,7 @@ public final class AxisymmetricDesign {
         return checked(new AxisymmetricDesign("", b, Require.nonNull("transmitter", transmitter),
                 Require.nonNull("receiver", receiver), Require.nonNull("separation", separation), null, null, null,
                 null, null,
-                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b)));
+                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
     /**
@@ -167,13 +168,13 @@ public final class AxisymmetricDesign {
         List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
         return checked(new AxisymmetricDesign("", b, null, null, null, null, null, Require.nonNull("sensor", sensor),
                 null, null,
-                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b)));
+                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
     private AxisymmetricDesign copy(String t, CurrentAmplitude dr, AmplitudeMeasure dm, MagneticFluxDensity ap,
                                     Decibels tol, Requirement req, Spelling sp) {
         return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, ap, tol, band,
-                points, req, sp, arrangement);
+                points, req, sp, arrangement, coils, Objects.equals(tol, tolerance) ? model : null);
     }
 
     /**
