@@ -279,4 +279,13 @@ class WholeDesignFileTest {
         // = 52.0412 dB (the definition of shielding effectiveness, IEEE Std 299-2006, clause 3).
         assertEquals(52.0412, d.requirement().entries().get(0).requiredDb(), 1e-4);
     }
+
+    @Test
+    void aCentreAtZeroIsNoShiftAndABareNumberIsRefused() {
+        WholeDesign zero = WholeDesignFile.parse(CAN.replace("\"centre\": \"2 mm\"", "\"centre\": \"0 mm\""), CAT);
+        WholeDesign none = WholeDesignFile.parse(CAN.replace(", \"centre\": \"2 mm\"", ""), CAT);
+        assertEquals(none.model(), zero.model());
+        MaterialFileException bare = refused(CAN.replace("\"-45 mm\"", "\"0.45\""));
+        assertEquals("$.arrangement.bodies[1].centre", bare.path());
+    }
 }
