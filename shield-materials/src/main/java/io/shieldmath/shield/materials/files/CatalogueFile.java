@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.materials.files;
 
+import io.shieldmath.shield.materials.internal.JsonValues;
+import io.shieldmath.shield.materials.internal.Node;
+
 import io.shieldmath.shield.field.FieldKind;
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.field.ImpedanceForm;
@@ -48,7 +51,9 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import static io.shieldmath.shield.materials.files.JsonValues.*;
+import static io.shieldmath.shield.materials.internal.JsonValues.*;
+import static io.shieldmath.shield.materials.internal.QuantityText.*;
+import static io.shieldmath.shield.materials.internal.DesignParts.*;
 
 /**
  * The catalogue file format: reading a catalogue document with strict validation and its
@@ -74,7 +79,7 @@ public final class CatalogueFile {
      */
     static final int CATALOGUE_VERSION = 3;
     /** The version from which permeability objects may hold a {@code "basis"}. */
-    static final int BASIS_VERSION = 3;
+    static final int BASIS_VERSION = JsonValues.CATALOGUE_BASIS_VERSION;
     /** The version from which property objects may hold a {@code "range"}. */
     static final int RANGE_VERSION = 2;
     static final int MAX_MATERIALS = 10_000;

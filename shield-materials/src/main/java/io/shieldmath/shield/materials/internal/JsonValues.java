@@ -1,7 +1,7 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials.files;
+package io.shieldmath.shield.materials.internal;
 
 import io.shieldmath.shield.field.FieldKind;
 import io.shieldmath.shield.internal.Text;
@@ -46,32 +46,64 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import io.shieldmath.shield.design.Requirement;
+import io.shieldmath.shield.materials.files.MaterialFileException;
+import io.shieldmath.shield.quantity.CurrentAmplitude;
+import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.quantity.ConductivityUnit;
+import io.shieldmath.shield.quantity.CurrentUnit;
+import io.shieldmath.shield.quantity.FluxDensityUnit;
+import io.shieldmath.shield.quantity.FrequencyUnit;
+import io.shieldmath.shield.quantity.LengthUnit;
 
 /**
  * What the catalogue and design formats share: the header check, located builder steps,
- * sources, permeability models and the exact text of quantities. Every value read goes
+ * sources and permeability models ({@link QuantityText} writes quantities, {@link DesignParts}
+ * holds the parts of the design formats). Every value read goes
  * through the core parse methods or the checks here; nothing is bound by reflection and no
  * type is taken from the document. Stateless.
  */
-final class JsonValues {
+public final class JsonValues {
 
-    static final int VERSION = 1;
-    static final int MAX_TABLE_POINTS = 1000;
+    /** The catalogue format version from which a permeability may say its {@code "basis"}. */
+    public static final int CATALOGUE_BASIS_VERSION = 3;
 
-    static final JsonMapper MAPPER = JsonMapper.builder().build();
+    /** The first version of every format. */
+    public static final int VERSION = 1;
+    /** The most points of a permeability table. */
+    public static final int MAX_TABLE_POINTS = 1000;
 
-    static final Set<String> VALUE_FIELDS = Set.of("value", "source");
+    /** The mapper that writes documents. */
+    public static final JsonMapper MAPPER = JsonMapper.builder().build();
+
+    /** The fields of a sourced value. */
+    public static final Set<String> VALUE_FIELDS = Set.of("value", "source");
     private static final Set<String> POINT_FIELDS = Set.of("frequency", "real", "loss");
 
     private JsonValues() {
     }
 
-    static void header(Node.Fields f, String format) {
+    /**
+     * Checks the format name and that the version is {@value #VERSION}.
+     *
+     * @param f      the root's fields
+     * @param format the format name
+     * @throws MaterialFileException if either is wrong
+     */
+    public static void header(Node.Fields f, String format) {
         header(f, format, VERSION);
     }
 
-    /** Checks the format name and reads the version, from {@value #VERSION} to {@code newest}. */
-    static int header(Node.Fields f, String format, int newest) {
+    /**
+     * Checks the format name and reads the version, from {@value #VERSION} to {@code newest}.
+     *
+     * @param f      the root's fields
+     * @param format the format name
+     * @param newest the newest version read
+     * @return the version
+     * @throws MaterialFileException if either is wrong
+     */
+    public static int header(Node.Fields f, String format, int newest) {
         Node fmt = f.required("format");
         if (!fmt.string().equals(format)) {
             throw fmt.error("expected \"" + format + "\", found \"" + fmt.text + "\"");
@@ -79,7 +111,14 @@ final class JsonValues {
         return f.required("version").integer(VERSION, newest);
     }
 
-    static String source(Node.Fields v) {
+    /**
+     * The source of a sourced value, not blank.
+     *
+     * @param v the value's fields
+     * @return the source
+     * @throws MaterialFileException if it is missing or blank
+     */
+    public static String source(Node.Fields v) {
         Node s = v.required("source");
         String text = s.string();
         if (text.isBlank()) {
@@ -89,8 +128,16 @@ final class JsonValues {
         return text;
     }
 
-    /** Runs a builder step, turning its exceptions into located ones. */
-    static <T> T at(Node node, Supplier<T> step) {
+    /**
+     * Runs a builder step, turning its exceptions into located ones.
+     *
+     * @param <T>  the result type
+     * @param node where a refusal is reported
+     * @param step the step
+     * @return its result
+     * @throws MaterialFileException if the step throws an IllegalArgumentException
+     */
+    public static <T> T at(Node node, Supplier<T> step) {
         try {
             return step.get();
         } catch (IllegalArgumentException e) {
@@ -98,12 +145,27 @@ final class JsonValues {
         }
     }
 
-    static RelativePermittivity permittivity(Node n) {
+    /**
+     * A relative permittivity given as a number.
+     *
+     * @param n the value
+     * @return the permittivity
+     * @throws MaterialFileException if it is not an acceptable one
+     */
+    public static RelativePermittivity permittivity(Node n) {
         double v = n.number();
         return n.convert(x -> RelativePermittivity.of(v), n.text);
     }
 
-    static PermeabilityModel readPermeability(Node n, boolean withSource) {
+    /**
+     * A permeability model: constant, relaxation or table, intrinsic or (a table) apparent.
+     *
+     * @param n          the value
+     * @param withSource whether a source (and range) field is allowed
+     * @return the model
+     * @throws MaterialFileException if it is not an acceptable model
+     */
+    public static PermeabilityModel readPermeability(Node n, boolean withSource) {
         return readPermeability(n, withSource, true, null);
     }
 
@@ -113,11 +175,15 @@ final class JsonValues {
      * permeability of a sheet ({@code "apparent"}, tables only, with {@code "sheetThickness"}),
      * which is converted to the intrinsic one with the conductivity given.
      *
+     * @param n            the value
+     * @param withSource   whether a source (and range) field is allowed
      * @param basisAllowed whether this document may hold {@code "basis"} (by its version)
      * @param conductivity the material's conductivity for an apparent table, or null if the
      *                     document gives none before the permeability
+     * @return the model
+     * @throws MaterialFileException if it is not an acceptable model
      */
-    static PermeabilityModel readPermeability(Node n, boolean withSource, boolean basisAllowed,
+    public static PermeabilityModel readPermeability(Node n, boolean withSource, boolean basisAllowed,
                                               Conductivity conductivity) {
         Node.Fields probe = n.object(Set.of("model", "value", "lowFrequency", "corner", "points", "source", "range",
                 "basis", "sheetThickness"));
@@ -127,7 +193,7 @@ final class JsonValues {
         boolean apparent = false;
         if (basisNode != null) {
             if (!basisAllowed) {
-                throw basisNode.error("\"basis\" needs version " + CatalogueFile.BASIS_VERSION
+                throw basisNode.error("\"basis\" needs version " + CATALOGUE_BASIS_VERSION
                         + " of the catalogue format");
             }
             String basis = basisNode.string();
@@ -208,7 +274,14 @@ final class JsonValues {
         return Set.copyOf(all);
     }
 
-    static void number(ObjectNode o, String key, double v) {
+    /**
+     * Writes a number, whole numbers without a decimal point.
+     *
+     * @param o   the object
+     * @param key the field name
+     * @param v   the number
+     */
+    public static void number(ObjectNode o, String key, double v) {
         if (v == Math.rint(v) && Math.abs(v) < 1e15) {
             o.put(key, (long) v);
         } else {
@@ -216,18 +289,25 @@ final class JsonValues {
         }
     }
 
-    static void writePermeability(ObjectNode o, PermeabilityModel model) {
+    /**
+     * Writes a permeability model as {@link #readPermeability(Node, boolean)} reads it.
+     *
+     * @param o     the object to fill
+     * @param model the model
+     * @throws IllegalArgumentException if the model is of a kind files do not hold
+     */
+    public static void writePermeability(ObjectNode o, PermeabilityModel model) {
         if (model instanceof ConstantPermeability c) {
             o.put("model", "constant");
             o.put("value", c.value().toString());
         } else if (model instanceof RelaxationPermeability r) {
             o.put("model", "relaxation");
             number(o, "lowFrequency", r.lowFrequencyValue());
-            o.put("corner", text(r.corner()));
+            o.put("corner", QuantityText.text(r.corner()));
         } else if (model instanceof ApparentPermeability a) {
             o.put("model", "table");
             o.put("basis", "apparent");
-            o.put("sheetThickness", text(a.sheetThickness()));
+            o.put("sheetThickness", QuantityText.text(a.sheetThickness()));
             writePoints(o, a.apparentTable());
         } else if (model instanceof TabulatedPermeability t) {
             o.put("model", "table");
@@ -245,56 +325,9 @@ final class JsonValues {
         double[] im = t.lossParts();
         for (int i = 0; i < hz.length; i++) {
             ObjectNode p = pts.addObject();
-            p.put("frequency", text(Frequency.ofHertz(hz[i])));
+            p.put("frequency", QuantityText.text(Frequency.ofHertz(hz[i])));
             number(p, "real", re[i]);
             number(p, "loss", im[i]);
         }
     }
-
-    // ================================================================ exact text of quantities
-
-    private static <Q> String exact(Q q, Function<String, Q> parse, double si, String siUnit) {
-        String pretty = q.toString();
-        try {
-            if (parse.apply(pretty).equals(q)) {
-                return pretty;
-            }
-        } catch (IllegalArgumentException e) {
-            // fall through to the SI form
-        }
-        return Text.exact(si) + " " + siUnit;
-    }
-
-    static String text(Conductivity c) {
-        return exact(c, Conductivity::parse, c.toSiemensPerMetre(), "S/m");
-    }
-
-    static String text(Length l) {
-        return exact(l, Length::parse, l.toMetres(), "m");
-    }
-
-    static String text(Frequency f) {
-        return exact(f, Frequency::parse, f.toHertz(), "Hz");
-    }
-
-    static String text(SheetResistance r) {
-        return exact(r, SheetResistance::parse, r.toOhmsPerSquare(), "Ω/sq");
-    }
-
-    static String text(MagneticFluxDensity b) {
-        return exact(b, MagneticFluxDensity::parse, b.toTesla(), "T");
-    }
-
-    static String text(Density d) {
-        return exact(d, Density::parse, d.toKilogramsPerCubicMetre(), "kg/m³");
-    }
-
-    static String text(TemperatureCoefficient a) {
-        return exact(a, TemperatureCoefficient::parse, a.toPerKelvin(), "/K");
-    }
-
-    static String text(Temperature t) {
-        return exact(t, Temperature::parse, t.toCelsius(), "°C");
-    }
-
 }
