@@ -305,6 +305,19 @@ public final class Body {
     }
 
     /**
+     * The body's cross-section in the (r, z) half-plane, for drawing it: non-overlapping
+     * rectangles that together make up the body, each {@code {r0, r1, z0, z1}} in m with
+     * r0 &lt; r1 and z0 &lt; z1, in this body's place in its arrangement. A disc, cap or annular
+     * plate is one rectangle; a tube is one; a can is its wall and one rectangle per cap (the
+     * caps lie inside the wall's radius, so rectangles of one can touch but never overlap).
+     *
+     * @return a new list of new arrays, at least one
+     */
+    public List<double[]> crossSectionMetres() {
+        return rectangles();
+    }
+
+    /**
      * The body's cross-section in the (r, z) half-plane as non-overlapping rectangles, each
      * {r0, r1, z0, z1} in m.
      *

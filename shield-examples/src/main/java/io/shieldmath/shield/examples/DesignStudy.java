@@ -18,7 +18,9 @@ import io.shieldmath.shield.axisymmetric.EstimatedValue;
 import io.shieldmath.shield.axisymmetric.SaturationSolution;
 import io.shieldmath.shield.axisymmetric.SaturationStudy;
 import io.shieldmath.shield.axisymmetric.SensorRegion;
+import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.coupling.Coil;
+import io.shieldmath.shield.coupling.DriveCurrent;
 import io.shieldmath.shield.coupling.CoilPair;
 import io.shieldmath.shield.coupling.CouplingEvaluation;
 import io.shieldmath.shield.design.Requirement;
@@ -106,6 +108,12 @@ public final class DesignStudy {
     static final double FINENESS = 0.5;
     /** The frequencies of the sweep table and plot besides the requirement's. */
     static final double[] SWEEP_HZ = {10, 100, 500, 2e3, 5e3, 1e4, 1e5, 2e5};
+    /** The SE chart's size in pixels. */
+    static final int CHART_WIDTH = 1000;
+    static final int CHART_HEIGHT = 680;
+    /** The field maps' size in pixels. */
+    static final int MAP_WIDTH = 900;
+    static final int MAP_HEIGHT = 760;
 
     private DesignStudy() {
     }
@@ -241,22 +249,67 @@ public final class DesignStudy {
         if (best != null) {
             writeDesign(best, need, design);
         }
-        List<SeChart.Curve> curves = new ArrayList<>();
+        SeChart chart = SeChart.titled("Candidate shields for the magnetometer board (illustrative)")
+                .requiring(need)
+                .switchingSourceAt(Hz(SOURCE_SPLIT_HZ), "transformer at 30 cm", "charger at 6 cm");
         for (Evaluated e : results) {
-            curves.add(new SeChart.Curve(e.candidate().solved() ? e.candidate().label()
-                    : e.candidate().label() + " (infinite sheet, comparison)", hz, e.seDb()));
+            chart = chart.plus(chartKind(e.candidate()), e.candidate().name(), hz, e.seDb());
         }
-        SeChart.write(folder.resolve("se-vs-frequency.png"), folder.resolve("se-vs-frequency.svg"),
-                "Candidate shields for the magnetometer board (illustrative)", curves, requirementSegments(need));
+        if (best != null) {
+            chart = chart.recommending(chartKind(best.candidate()), best.candidate().name());
+        }
+        chart.writePng(folder.resolve("se-vs-frequency.png"), CHART_WIDTH, CHART_HEIGHT);
+        chart.writeSvg(folder.resolve("se-vs-frequency.svg"), CHART_WIDTH, CHART_HEIGHT);
+        List<String> maps = writeFieldMaps(folder, copper, best, need);
         out.println();
         out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, chosen-design.json, "
-                + "se-vs-frequency.png, se-vs-frequency.svg");
+                + "se-vs-frequency.png, se-vs-frequency.svg" + (maps.isEmpty() ? "" : ", " + String.join(", ", maps)));
         if (best == null) {
             return new Outcome(null, null, need, folder, null, null, Double.NaN);
         }
         Margin w = best.worst();
         return new Outcome(best.candidate().label(), design, need, folder, best.candidate().evaluation(),
                 Frequency.ofHertz(w.hertz()), w.seDb());
+    }
+
+    /**
+     * Field maps of the bench case (the 1 mm copper plate between the charger coil and the
+     * sensor at 20 kHz, 1 A peak in the charger coil) and of the recommended can at its worst
+     * frequency in the ambient field of that band.
+     */
+    private static List<String> writeFieldMaps(Path folder, Material copper, Evaluated best, Requirement need)
+            throws IOException {
+        List<String> written = new ArrayList<>();
+        List<Layer> plate = List.of(Layer.of(copper, mm(1)));
+        Arrangement bench = plateBodies(plate, CHARGER_DISTANCE);
+        CoilPair pair = coils(true);
+        Frequency f = kHz(20);
+        FieldMapPicture benchMap = FieldMapPicture.around(bench, pair,
+                        bench.between(pair).withFineness(FINENESS).at(f), DriveCurrent.ofAmperes(1, AmplitudeMeasure.PEAK, f))
+                .titled(String.format(Locale.ROOT, "Copper plate, 1 mm, %.0f mm across, between the charger coil and the "
+                        + "sensor at 20 kHz (1 A peak; illustrative)", 2 * PLATE_RADIUS.toMetres() * 1e3));
+        benchMap.writePng(folder.resolve("field-map-bench.png"), MAP_WIDTH, MAP_HEIGHT);
+        benchMap.writeSvg(folder.resolve("field-map-bench.svg"), MAP_WIDTH, MAP_HEIGHT);
+        written.add("field-map-bench.png");
+        written.add("field-map-bench.svg");
+        if (best != null && best.candidate().evaluation() instanceof AxialFieldShielding can) {
+            Margin w = best.worst();
+            Frequency at = Frequency.ofHertz(w.hertz());
+            FieldMapPicture canMap = FieldMapPicture.around(best.candidate().arrangement(), can.at(at),
+                            w.entry().incident())
+                    .titled("Recommended " + best.candidate().label() + ", in " + w.entry().incident() + " along its axis at "
+                            + at + " (illustrative)");
+            canMap.writePng(folder.resolve("field-map-can.png"), MAP_WIDTH, MAP_HEIGHT);
+            canMap.writeSvg(folder.resolve("field-map-can.svg"), MAP_WIDTH, MAP_HEIGHT);
+            written.add("field-map-can.png");
+            written.add("field-map-can.svg");
+        }
+        return written;
+    }
+
+    /** How the chart draws a candidate: by its kind, infinite sheets as comparisons. */
+    private static SeChart.Kind chartKind(Candidate c) {
+        return c.solved() ? SeChart.Kind.valueOf(c.kind().toUpperCase(Locale.ROOT)) : SeChart.Kind.SHEET;
     }
 
     /** The coils of the charger (above the source split) or of the transformer (below it). */
@@ -575,21 +628,5 @@ public final class DesignStudy {
             s.append('\n');
         }
         Files.writeString(file, s, StandardCharsets.UTF_8);
-    }
-
-    private static List<SeChart.Curve> requirementSegments(Requirement need) {
-        List<SeChart.Curve> segments = new ArrayList<>();
-        for (Requirement.Entry e : need.entries()) {
-            double lo = e.band().low().toHertz();
-            double hi = e.band().high().toHertz();
-            // widen each band on the plot so that it can be seen: a quarter of a decade at least
-            double mid = Math.sqrt(lo * hi);
-            lo = Math.min(lo, mid / 1.33);
-            hi = Math.max(hi, mid * 1.33);
-            segments.add(new SeChart.Curve(segments.isEmpty() ? "required SE per band" : "required, " + e.band(),
-                    new double[] {lo, hi},
-                    new double[] {e.requiredDb(), e.requiredDb()}));
-        }
-        return segments;
     }
 }
