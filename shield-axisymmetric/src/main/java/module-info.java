@@ -5,10 +5,15 @@
 /**
  * shield-axisymmetric: finite shields of revolution (discs, annular plates, tubes, caps and
  * cans) between coaxial coils or in a uniform axial field, solved by axisymmetric finite
- * elements. The numerics live in a package that is not exported.
+ * elements. The numerics live in a package that is not exported. The package {@code files}
+ * reads and writes whole designs of every kind (planar, shell, axisymmetric) in one file.
  */
 module io.shieldmath.shield.axisymmetric {
     requires transitive io.shieldmath.shield.core;
+    // Whole-design files name catalogue materials and planar/shell designs in their API.
+    requires transitive io.shieldmath.shield.materials;
+    requires tools.jackson.databind;
 
     exports io.shieldmath.shield.axisymmetric;
+    exports io.shieldmath.shield.axisymmetric.files;
 }

@@ -14,4 +14,7 @@ module io.shieldmath.shield.materials {
 
     exports io.shieldmath.shield.materials;
     exports io.shieldmath.shield.materials.files;
+
+    // The located JSON reader and shared format parts, for this library's own whole-design files only.
+    exports io.shieldmath.shield.materials.internal to io.shieldmath.shield.axisymmetric;
 }

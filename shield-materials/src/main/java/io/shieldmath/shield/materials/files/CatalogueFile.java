@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.materials.files;
 
+import io.shieldmath.shield.materials.internal.JsonValues;
+import io.shieldmath.shield.materials.internal.Node;
+
 import io.shieldmath.shield.field.FieldKind;
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.field.ImpedanceForm;
@@ -47,7 +50,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import static io.shieldmath.shield.materials.files.JsonValues.*;
+import static io.shieldmath.shield.materials.internal.JsonValues.*;
 
 /**
  * The catalogue file format: reading a catalogue document with strict validation and its

@@ -17,6 +17,7 @@ import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
 import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.materials.internal.Spelling;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -41,8 +42,9 @@ import java.util.Objects;
  * infinite flat sheet; real shields are limited by seams, openings and edges and must be
  * verified by measurement.
  *
- * <p>Immutable and thread-safe; equality is by value. {@link #withTitle(String)} returns a
- * copy.
+ * <p>Immutable and thread-safe; equality is by value, the texts a design read from a file
+ * gave its quantities in included (so equal designs write equal documents).
+ * {@link #withTitle(String)} returns a copy.
  */
 public final class Design {
 
@@ -57,13 +59,15 @@ public final class Design {
     private final Barrier barrier;
     private final DesignShell shell;
     private final Requirement requirement;
+    private final Spelling spelling;
 
     private Design(String title, List<DesignLayer> layers, IncidentField field, FrequencyBand band, int points) {
-        this(title, layers, field, band, points, null, Requirement.none());
+        this(title, layers, field, band, points, null, Requirement.none(), Spelling.DEFAULT);
     }
 
     private Design(String title, List<DesignLayer> layers, IncidentField field, FrequencyBand band, int points,
-                   DesignShell shell, Requirement requirement) {
+                   DesignShell shell, Requirement requirement, Spelling spelling) {
+        this.spelling = spelling;
         this.shell = shell;
         this.requirement = requirement;
         this.title = title;
@@ -112,7 +116,7 @@ public final class Design {
     public Design withTitle(String newTitle) {
         Require.nonNull("title", newTitle);
         String t = newTitle.isBlank() ? "" : Require.text("design title", newTitle, 200);
-        return t.equals(title) ? this : new Design(t, layers, field, band, points, shell, requirement);
+        return t.equals(title) ? this : new Design(t, layers, field, band, points, shell, requirement, spelling);
     }
 
     /**
@@ -129,7 +133,7 @@ public final class Design {
     public static Design of(DesignShell shell, IncidentField field, FrequencyBand band, int points) {
         Require.nonNull("shell", shell);
         Design planar = of(shell.walls(), field, band, points);
-        return new Design("", planar.layers, field, band, points, shell, Requirement.none());
+        return new Design("", planar.layers, field, band, points, shell, Requirement.none(), Spelling.DEFAULT);
     }
 
     /**
@@ -140,7 +144,18 @@ public final class Design {
      */
     public Design meeting(Requirement newRequirement) {
         Require.nonNull("requirement", newRequirement);
-        return new Design(title, layers, field, band, points, shell, newRequirement);
+        return new Design(title, layers, field, band, points, shell, newRequirement, spelling);
+    }
+
+    /** A copy that writes its quantities in the texts they were read in (for {@link DesignFile}). */
+    Design spelledAs(Spelling newSpelling) {
+        return newSpelling.equals(spelling) ? this
+                : new Design(title, layers, field, band, points, shell, requirement, newSpelling);
+    }
+
+    /** The texts the quantities were read in, where they differ from the default form. */
+    Spelling spelling() {
+        return spelling;
     }
 
     /**
@@ -243,12 +258,12 @@ public final class Design {
     public boolean equals(Object o) {
         return o instanceof Design d && d.title.equals(title) && d.layers.equals(layers) && d.field.equals(field)
                 && d.band.equals(band) && d.points == points && Objects.equals(d.shell, shell)
-                && d.requirement.equals(requirement);
+                && d.requirement.equals(requirement) && d.spelling.equals(spelling);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(title, layers, field, band, points, shell, requirement);
+        return Objects.hash(title, layers, field, band, points, shell, requirement, spelling);
     }
 
     @Override

@@ -3,6 +3,10 @@
  */
 package io.shieldmath.shield.materials.files;
 
+import io.shieldmath.shield.materials.internal.JsonValues;
+import io.shieldmath.shield.materials.internal.Node;
+import io.shieldmath.shield.materials.internal.Spelling;
+
 import io.shieldmath.shield.field.FieldKind;
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.field.ImpedanceForm;
@@ -45,7 +49,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import static io.shieldmath.shield.materials.files.JsonValues.*;
+import static io.shieldmath.shield.materials.internal.JsonValues.*;
 
 /**
  * The design file format: reading a design document, resolving material identifiers
@@ -65,18 +69,20 @@ public final class DesignFile {
 
     static final String DESIGN_FORMAT = "shield-design";
 
-    /** The version this class writes; version 1 files (a planar stack only) are still read. */
-    static final int DESIGN_VERSION = 2;
+    /**
+     * The version this class writes; versions 1 (a planar stack only) and 2 are still read.
+     * Version 3 may also hold an axisymmetric arrangement, which shield-axisymmetric's
+     * whole-design file reads.
+     */
+    static final int DESIGN_VERSION = 3;
 
     private static final Set<String> DESIGN_FIELDS = Set.of("format", "version", "title", "layers", "field", "band",
-            "points", "shell", "cases");
+            "points", "shell", "cases", "arrangement");
     private static final Set<String> SHELL_FIELDS = Set.of("form", "sides", "radius", "walls", "openings",
             "exposure");
     private static final Set<String> OPENING_FIELDS = Set.of("kind", "diameter", "count", "length", "width",
             "tubeDepth", "victimDistance", "name");
-    private static final Set<String> CASE_FIELDS = Set.of("band", "incident", "tolerated");
     private static final Set<String> LAYER_FIELDS = Set.of("material", "thickness", "temperature", "gap", "medium");
-    private static final Set<String> MEDIUM_FIELDS = Set.of("name", "conductivity", "permeability", "permittivity");
     private static final Set<String> FIELD_FIELDS = Set.of("kind", "distance", "impedance");
 
     private DesignFile() {
@@ -134,7 +140,7 @@ public final class DesignFile {
      * <pre>
      * {
      *   "format": "shield-design",
-     *   "version": 2,
+     *   "version": 3,
      *   "title": "lid for a fluxgate housing",            (optional)
      *   "layers": [
      *     { "material": "copper-annealed", "thickness": "0.3 mm" },
@@ -169,8 +175,13 @@ public final class DesignFile {
      * Field kinds: {@code plane-wave} (no distance or impedance), {@code magnetic-near-field},
      * {@code electric-near-field}; impedance forms {@code textbook}, {@code exact-dipole}. A
      * finish known by sheet resistance may omit the thickness (its nominal one is used).
-     * Values are written in a short unit form where that reads back exactly, else in SI
-     * units with every digit.
+     * A design read from a file is written back with every quantity in the text it was given
+     * in ("0.2 mm" stays "0.2 mm", "21 mil" stays "21 mil"); other values are written in a
+     * short unit form where that reads back exactly, else in SI units with every digit.
+     * Version 3 documents may instead hold an axisymmetric {@code "arrangement"} (finite bodies
+     * between coils or in an applied field); those are read and written by
+     * {@code io.shieldmath.shield.axisymmetric.files.WholeDesignFile} in shield-axisymmetric,
+     * which reads every kind. This class refuses them at the {@code "arrangement"} field.
      *
      * @param design the design, not null
      * @return the document, pretty-printed
@@ -200,6 +211,14 @@ public final class DesignFile {
         int version = f.required("version").integer(1, DESIGN_VERSION);
         if (version == 1) {
             root.object(Set.of("format", "version", "title", "layers", "field", "band", "points"));
+        } else if (version == 2) {
+            root.object(Set.of("format", "version", "title", "layers", "field", "band", "points", "shell", "cases"));
+        }
+        Node arrangement = f.optional("arrangement");
+        if (arrangement != null) {
+            throw arrangement.error("this design is an axisymmetric arrangement; read it with "
+                    + "io.shieldmath.shield.axisymmetric.files.WholeDesignFile (module shield-axisymmetric), "
+                    + "which reads every kind of design");
         }
         Node shellNode = f.optional("shell");
         if (shellNode != null && f.has("layers")) {
@@ -214,13 +233,16 @@ public final class DesignFile {
         Design planar = at(bandNode, () -> shell == null ? Design.of(layers, field, band, points)
                 : Design.of(shell, field, band, points));
         Node casesNode = f.optional("cases");
-        Design d = casesNode == null ? planar : planar.meeting(readCases(casesNode));
+        Design cased = casesNode == null ? planar : planar.meeting(readCases(casesNode));
         Node title = f.optional("title");
+        Design d;
         if (title == null) {
-            return d;
+            d = cased;
+        } else {
+            String t = title.string();
+            d = at(title, () -> cased.withTitle(t));
         }
-        String t = title.string();
-        return at(title, () -> d.withTitle(t));
+        return d.spelledAs(Spelling.of(root.spelled()));
     }
 
     private static List<DesignLayer> readLayers(Node layersNode, Catalogue catalogue) {
@@ -327,19 +349,6 @@ public final class DesignFile {
         return o;
     }
 
-    private static io.shieldmath.shield.design.Requirement readCases(Node n) {
-        io.shieldmath.shield.design.Requirement r = io.shieldmath.shield.design.Requirement.none();
-        for (Node c : n.array(0, 1000)) {
-            Node.Fields f = c.object(CASE_FIELDS);
-            Node bn = f.required("band");
-            FrequencyBand b = bn.quantity(FrequencyBand::parse, "19 kHz to 21 kHz");
-            MagneticFluxDensity in = f.required("incident").quantity(MagneticFluxDensity::parse, "8 µT");
-            MagneticFluxDensity tol = f.required("tolerated").quantity(MagneticFluxDensity::parse, "5 nT");
-            io.shieldmath.shield.design.Requirement before = r;
-            r = at(c, () -> before.plus(b, in, tol));
-        }
-        return r;
-    }
 
     private static DesignLayer readLayer(Node n, Catalogue catalogue) {
         Node.Fields f = n.object(LAYER_FIELDS);
@@ -381,21 +390,6 @@ public final class DesignFile {
         return at(where, () -> DesignLayer.of(m, t, c));
     }
 
-    private static Medium readMedium(Node n) {
-        Node.Fields f = n.object(MEDIUM_FIELDS);
-        Node nameNode = f.required("name");
-        String name = nameNode.string();
-        Conductivity sigma = f.required("conductivity").quantity(Conductivity::parse, "1 MS/m");
-        Node mu = f.optional("permeability");
-        PermeabilityModel model = mu == null ? ConstantPermeability.ONE : readPermeability(mu, false);
-        Node eps = f.optional("permittivity");
-        RelativePermittivity epsilon = eps == null ? RelativePermittivity.ONE : permittivity(eps);
-        Medium m = at(nameNode, () -> Medium.of(Require.text("medium name", name, 200), sigma, model, epsilon));
-        Node sigmaNode = f.required("conductivity");
-        at(sigmaNode, () -> Require.inRange("medium conductivity",
-                sigma.toSiemensPerMetre(), 0, 1e9, "S/m"));
-        return m;
-    }
 
     private static IncidentField readField(Node n) {
         Node.Fields f = n.object(FIELD_FIELDS);
@@ -434,16 +428,17 @@ public final class DesignFile {
         if (!d.title().isEmpty()) {
             root.put("title", d.title());
         }
+        Spelling sp = d.spelling();
         if (d.shell().isPresent()) {
-            writeShell(root.putObject("shell"), d.shell().get());
+            writeShell(root.putObject("shell"), d.shell().get(), sp);
         } else {
-            writeLayers(root.putArray("layers"), d.layers());
+            writeLayers(root.putArray("layers"), d.layers(), sp);
         }
-        writeFieldBandCases(root, d);
+        writeFieldBandCases(root, d, sp);
         return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
     }
 
-    private static void writeShell(ObjectNode o, DesignShell s) {
+    private static void writeShell(ObjectNode o, DesignShell s, Spelling sp) {
         o.put("form", switch (s.form()) {
             case BOX -> "box";
             case SPHERE -> "sphere";
@@ -453,65 +448,60 @@ public final class DesignFile {
         if (s.form() == DesignShell.Form.BOX) {
             ArrayNode sides = o.putArray("sides");
             for (Length l : s.sizes()) {
-                sides.add(text(l));
+                sides.add(sp.text(l));
             }
         } else {
-            o.put("radius", text(s.sizes().get(0)));
+            o.put("radius", sp.text(s.sizes().get(0)));
         }
-        writeLayers(o.putArray("walls"), s.walls());
+        writeLayers(o.putArray("walls"), s.walls(), sp);
         ArrayNode openings = o.putArray("openings");
         for (io.shieldmath.shield.enclosure.Opening op : s.openings()) {
             ObjectNode on = openings.addObject();
             switch (op.kind()) {
                 case HOLE:
                     on.put("kind", "holes");
-                    on.put("diameter", text(op.largestDimension()));
+                    on.put("diameter", sp.text(op.largestDimension()));
                     on.put("count", op.count());
                     break;
                 case SLOT:
                     on.put("kind", "slot");
-                    on.put("length", text(op.largestDimension()));
-                    on.put("width", text(op.width().get()));
+                    on.put("length", sp.text(op.largestDimension()));
+                    on.put("width", sp.text(op.width().get()));
                     break;
                 default:
                     on.put("kind", "seam");
-                    on.put("length", text(op.largestDimension()));
+                    on.put("length", sp.text(op.largestDimension()));
             }
-            op.tubeDepth().ifPresent(t -> on.put("tubeDepth", text(t)));
-            op.victimDistance().ifPresent(t -> on.put("victimDistance", text(t)));
+            op.tubeDepth().ifPresent(t -> on.put("tubeDepth", sp.text(t)));
+            op.victimDistance().ifPresent(t -> on.put("victimDistance", sp.text(t)));
             on.put("name", op.name());
         }
         o.put("exposure", s.uniformField() ? "uniform" : "incident-field");
     }
 
-    private static void writeLayers(ArrayNode layers, List<DesignLayer> list) {
+    private static void writeLayers(ArrayNode layers, List<DesignLayer> list, Spelling sp) {
         for (DesignLayer l : list) {
             ObjectNode o = layers.addObject();
             switch (l.kind()) {
                 case GAP:
-                    o.put("gap", text(l.thickness()));
+                    o.put("gap", sp.text(l.thickness()));
                     break;
                 case MEDIUM: {
-                    ObjectNode m = o.putObject("medium");
-                    Medium med = l.medium();
-                    m.put("name", med.name());
-                    m.put("conductivity", text(med.conductivity()));
-                    writePermeability(m.putObject("permeability"), med.permeability());
-                    number(m, "permittivity", med.permittivity().value());
-                    o.put("thickness", text(l.thickness()));
+                    writeMedium(o.putObject("medium"), l.medium(), sp);
+                    o.put("thickness", sp.text(l.thickness()));
                     break;
                 }
                 default:
                     o.put("material", l.material().get().id());
-                    o.put("thickness", text(l.thickness()));
+                    o.put("thickness", sp.text(l.thickness()));
                     if (l.temperature().isPresent()) {
-                        o.put("temperature", text(l.temperature().get()));
+                        o.put("temperature", sp.text(l.temperature().get()));
                     }
             }
         }
     }
 
-    private static void writeFieldBandCases(ObjectNode root, Design d) {
+    private static void writeFieldBandCases(ObjectNode root, Design d, Spelling sp) {
         ObjectNode field = root.putObject("field");
         IncidentField fld = d.field();
         switch (fld.kind()) {
@@ -521,19 +511,11 @@ public final class DesignFile {
             default:
                 field.put("kind", fld.kind() == FieldKind.MAGNETIC_NEAR_FIELD ? "magnetic-near-field"
                         : "electric-near-field");
-                field.put("distance", text(fld.distance()));
+                field.put("distance", sp.text(fld.distance()));
                 field.put("impedance", fld.form() == ImpedanceForm.TEXTBOOK ? "textbook" : "exact-dipole");
         }
-        root.put("band", text(d.band().low()) + " to " + text(d.band().high()));
+        root.put("band", sp.text(d.band()));
         root.put("points", d.points());
-        if (!d.requirement().entries().isEmpty()) {
-            ArrayNode cases = root.putArray("cases");
-            for (io.shieldmath.shield.design.Requirement.Entry e : d.requirement().entries()) {
-                ObjectNode c = cases.addObject();
-                c.put("band", text(e.band().low()) + " to " + text(e.band().high()));
-                c.put("incident", text(e.incident()));
-                c.put("tolerated", text(e.tolerated()));
-            }
-        }
+        writeCases(root, d.requirement(), sp);
     }
 }

@@ -3,6 +3,9 @@
  */
 package io.shieldmath.shield.materials.files;
 
+import io.shieldmath.shield.materials.internal.JsonValues;
+import io.shieldmath.shield.materials.internal.Node;
+
 import io.shieldmath.shield.internal.Require;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.MagnetizationCurves;

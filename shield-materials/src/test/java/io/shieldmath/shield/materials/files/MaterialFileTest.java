@@ -3,6 +3,8 @@
  */
 package io.shieldmath.shield.materials.files;
 
+import io.shieldmath.shield.materials.internal.Node;
+
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.materials.MaterialProperty;

@@ -1,7 +1,9 @@
 /*
  * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
  */
-package io.shieldmath.shield.materials.files;
+package io.shieldmath.shield.materials.internal;
+
+import io.shieldmath.shield.materials.files.MaterialFileException;
 
 import io.shieldmath.shield.internal.Text;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
@@ -39,13 +41,18 @@ import tools.jackson.core.json.JsonFactory;
  *
  * <p>Immutable once read.
  */
-final class Node {
+public final class Node {
 
-    static final int MAX_DEPTH = 32;
-    static final long MAX_DOCUMENT_CHARS = 4_000_000;
-    static final int MAX_STRING = 100_000;
-    static final int MAX_NUMBER = 64;
-    static final int MAX_NAME = 200;
+    /** Deepest nesting. */
+    public static final int MAX_DEPTH = 32;
+    /** Longest document, in UTF-16 code units. */
+    public static final long MAX_DOCUMENT_CHARS = 4_000_000;
+    /** Longest string. */
+    public static final int MAX_STRING = 100_000;
+    /** Most digits of a number. */
+    public static final int MAX_NUMBER = 64;
+    /** Longest field name. */
+    public static final int MAX_NAME = 200;
 
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .streamReadConstraints(StreamReadConstraints.builder()
@@ -59,9 +66,20 @@ final class Node {
             .disable(StreamReadFeature.AUTO_CLOSE_SOURCE)
             .build();
 
-    enum Type {
-        OBJECT("an object"), ARRAY("an array"), STRING("a text value"), NUMBER("a number"),
-        BOOLEAN("true or false"), NULL("null");
+    /** The JSON value types. */
+    public enum Type {
+        /** An object. */
+        OBJECT("an object"),
+        /** An array. */
+        ARRAY("an array"),
+        /** A string. */
+        STRING("a text value"),
+        /** A number, kept as its text. */
+        NUMBER("a number"),
+        /** true or false. */
+        BOOLEAN("true or false"),
+        /** null. */
+        NULL("null");
 
         final String words;
 
@@ -70,17 +88,27 @@ final class Node {
         }
     }
 
-    final Type type;
-    final String path;
-    final int line;
-    final int column;
-    /** String value or number text. */
-    final String text;
-    final Map<String, Node> fields;
-    final List<Node> items;
+    /** The type. */
+    public final Type type;
+    /** The JSON path, such as {@code $.layers[0].thickness}. */
+    public final String path;
+    /** The line, from 1. */
+    public final int line;
+    /** The column, from 1. */
+    public final int column;
+    /** String value or number text; null for objects, arrays and null. */
+    public final String text;
+    /** The fields of an object, else null. */
+    public final Map<String, Node> fields;
+    /** The items of an array, else null. */
+    public final List<Node> items;
+
+    /** The document's quantities whose text differs from their default written form: default text to text. */
+    private final Map<String, String> spelled;
 
     private Node(Type type, String path, int line, int column, String text, Map<String, Node> fields,
-                 List<Node> items) {
+                 List<Node> items, Map<String, String> spelled) {
+        this.spelled = spelled;
         this.type = type;
         this.path = path;
         this.line = line;
@@ -95,8 +123,12 @@ final class Node {
     /**
      * Reads a document given as text. The limit is {@value #MAX_DOCUMENT_CHARS} characters
      * (UTF-16 code units), the same rule as for streams; a leading byte-order mark is skipped.
+     *
+     * @param json the document
+     * @return the root value
+     * @throws MaterialFileException if it is not valid JSON or over a limit
      */
-    static Node parse(String json) {
+    public static Node parse(String json) {
         if (json.length() > MAX_DOCUMENT_CHARS) {
             throw tooLong(json.length());
         }
@@ -111,8 +143,25 @@ final class Node {
      * RFC 4627 section 3), the bytes are decoded strictly (a malformed sequence is refused
      * with its line and column), and the text is then read as by {@link #parse(String)}, so
      * the size limit and the columns are the same as for a string.
+     *
+     * @param in the stream, not closed
+     * @return the root value
+     * @throws MaterialFileException if it is not valid JSON or over a limit
+     * @throws UncheckedIOException if reading fails
      */
-    static Node parse(InputStream in) {
+    public static Node parse(InputStream in) {
+        return parse(text(in));
+    }
+
+    /**
+     * The text of a document in a stream, read and decoded as {@link #parse(InputStream)} does.
+     *
+     * @param in the stream, not closed
+     * @return the text
+     * @throws MaterialFileException if it is too long or not validly encoded
+     * @throws UncheckedIOException if reading fails
+     */
+    public static String text(InputStream in) {
         byte[] bytes;
         try {
             bytes = in.readNBytes((int) (4 * MAX_DOCUMENT_CHARS + 4));
@@ -122,7 +171,7 @@ final class Node {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        return parse(decode(bytes));
+        return decode(bytes);
     }
 
     private static MaterialFileException tooLong(long chars) {
@@ -130,8 +179,14 @@ final class Node {
                 + " characters" + (chars > 0 ? " (" + chars + ")" : ""), null);
     }
 
-    /** Detects the encoding of a JSON document and decodes it strictly. */
-    static String decode(byte[] b) {
+    /**
+     * Detects the encoding of a JSON document and decodes it strictly.
+     *
+     * @param b the bytes
+     * @return the text
+     * @throws MaterialFileException if a byte sequence is malformed or the text is too long
+     */
+    public static String decode(byte[] b) {
         int n = b.length;
         java.nio.charset.Charset cs = java.nio.charset.StandardCharsets.UTF_8;
         int skip = 0;
@@ -232,6 +287,7 @@ final class Node {
     private static final class State {
         JsonParser parser;
         String path = "$";
+        final Map<String, String> spelled = new LinkedHashMap<>();
 
         JsonToken next() {
             return parser.nextToken();
@@ -264,7 +320,7 @@ final class Node {
                         map.put(name, value(next(), child, depth + 1));
                         path = at;
                     }
-                    return new Node(Type.OBJECT, at, line, col, null, Collections.unmodifiableMap(map), null);
+                    return new Node(Type.OBJECT, at, line, col, null, Collections.unmodifiableMap(map), null, spelled);
                 }
                 case START_ARRAY: {
                     List<Node> list = new ArrayList<>();
@@ -272,19 +328,19 @@ final class Node {
                         list.add(value(v, at + "[" + list.size() + "]", depth + 1));
                         path = at;
                     }
-                    return new Node(Type.ARRAY, at, line, col, null, null, Collections.unmodifiableList(list));
+                    return new Node(Type.ARRAY, at, line, col, null, null, Collections.unmodifiableList(list), spelled);
                 }
                 case VALUE_STRING:
-                    return new Node(Type.STRING, at, line, col, parser.getString(), null, null);
+                    return new Node(Type.STRING, at, line, col, parser.getString(), null, null, spelled);
                 case VALUE_NUMBER_INT:
                 case VALUE_NUMBER_FLOAT:
-                    return new Node(Type.NUMBER, at, line, col, parser.getString(), null, null);
+                    return new Node(Type.NUMBER, at, line, col, parser.getString(), null, null, spelled);
                 case VALUE_TRUE:
                 case VALUE_FALSE:
                     return new Node(Type.BOOLEAN, at, line, col, Boolean.toString(t == JsonToken.VALUE_TRUE), null,
-                            null);
+                            null, spelled);
                 case VALUE_NULL:
-                    return new Node(Type.NULL, at, line, col, null, null, null);
+                    return new Node(Type.NULL, at, line, col, null, null, null, spelled);
                 default:
                     throw error("unexpected " + t);
             }
@@ -293,11 +349,24 @@ final class Node {
 
     // ---------------------------------------------------------------- validation helpers
 
-    MaterialFileException error(String problem) {
+    /**
+     * An error located at this value.
+     *
+     * @param problem the problem in words
+     * @return the exception, to throw
+     */
+    public MaterialFileException error(String problem) {
         return new MaterialFileException(path, line, column, problem, null);
     }
 
-    MaterialFileException error(String problem, Throwable cause) {
+    /**
+     * An error located at this value, with its cause.
+     *
+     * @param problem the problem in words
+     * @param cause   the cause, or null
+     * @return the exception, to throw
+     */
+    public MaterialFileException error(String problem, Throwable cause) {
         return new MaterialFileException(path, line, column, problem, cause);
     }
 
@@ -310,8 +379,12 @@ final class Node {
 
     /**
      * This object's fields, checking that every field name is one of {@code allowed}.
+     *
+     * @param allowed the allowed field names
+     * @return the fields
+     * @throws MaterialFileException if this is not an object or a field is unknown
      */
-    Fields object(Set<String> allowed) {
+    public Fields object(Set<String> allowed) {
         expect(Type.OBJECT);
         for (Map.Entry<String, Node> e : fields.entrySet()) {
             if (!allowed.contains(e.getKey())) {
@@ -322,7 +395,15 @@ final class Node {
         return new Fields(this);
     }
 
-    List<Node> array(int min, int max) {
+    /**
+     * This array's items, checking their number.
+     *
+     * @param min the fewest items
+     * @param max the most items
+     * @return the items
+     * @throws MaterialFileException if this is not an array or the number is out of range
+     */
+    public List<Node> array(int min, int max) {
         expect(Type.ARRAY);
         if (items.size() < min || items.size() > max) {
             throw error("expected " + min + " to " + max + " entries, found " + items.size());
@@ -330,21 +411,51 @@ final class Node {
         return items;
     }
 
-    String string() {
+    /**
+     * This text value.
+     *
+     * @return the text
+     * @throws MaterialFileException if this is not a text value
+     */
+    public String string() {
         return expect(Type.STRING).text;
     }
 
-    /** A text value read by a quantity parser; its exceptions become located ones. */
-    <Q> Q quantity(Function<String, Q> parser, String example) {
+    /**
+     * A text value read by a quantity parser; its exceptions become located ones.
+     *
+     * @param <Q>     the quantity type
+     * @param parser  the parser
+     * @param example an example for the message
+     * @return the quantity
+     * @throws MaterialFileException if this is not a text value or the parser refuses it
+     */
+    public <Q> Q quantity(Function<String, Q> parser, String example) {
         if (type != Type.STRING) {
             throw error("expected a text value with a unit, such as \"" + example + "\", found " + type.words);
         }
         return convert(parser, text);
     }
 
-    <Q> Q convert(Function<String, Q> parser, String value) {
+    /**
+     * A value read by a parser, its exceptions located at this value. A quantity read here
+     * whose text differs from its default written form is noted in {@link #spelled()}.
+     *
+     * @param <Q>    the result type
+     * @param parser the parser
+     * @param value  the text to read
+     * @return the result
+     * @throws MaterialFileException if the parser refuses the text
+     */
+    public <Q> Q convert(Function<String, Q> parser, String value) {
         try {
-            return parser.apply(value);
+            Q q = parser.apply(value);
+            String plain = JsonValues.defaultText(q);
+            if (plain != null && !plain.equals(value)) {
+                // Reading is single-threaded; the map is only read once the whole document is read.
+                spelled.putIfAbsent(plain, value);
+            }
+            return q;
         } catch (IllegalArgumentException | ArithmeticException e) {
             throw error(e.getMessage(), e);
         }
@@ -353,8 +464,11 @@ final class Node {
     /**
      * A plain number, or a text value holding one, read by the one number grammar of the
      * core ({@code Text.parseNumber}): a number that overflows or underflows to 0 is refused.
+     *
+     * @return the number
+     * @throws MaterialFileException if this is not a number
      */
-    double number() {
+    public double number() {
         if (type != Type.NUMBER && type != Type.STRING) {
             throw error("expected a number, found " + type.words);
         }
@@ -365,7 +479,26 @@ final class Node {
         }
     }
 
-    int integer(int min, int max) {
+    /**
+     * The quantities of this value's document read so far whose text differs from the form
+     * {@link JsonValues#defaultText(Object)} would write: from that default text to the text
+     * as given, so that a design read from a file is written back in the user's units.
+     *
+     * @return an unmodifiable copy
+     */
+    public Map<String, String> spelled() {
+        return Map.copyOf(spelled);
+    }
+
+    /**
+     * A whole number in a range.
+     *
+     * @param min the smallest
+     * @param max the largest
+     * @return the number
+     * @throws MaterialFileException if this is not a whole number in range
+     */
+    public int integer(int min, int max) {
         expect(Type.NUMBER);
         if (!text.matches("-?[0-9]{1,10}")) {
             throw error("expected a whole number from " + min + " to " + max + ", found " + text);
@@ -378,14 +511,27 @@ final class Node {
     }
 
     /** The fields of one JSON object, already checked against the allowed names. */
-    static final class Fields {
-        final Node node;
+    public static final class Fields {
+        /** The object. */
+        public final Node node;
 
-        Fields(Node node) {
+        /**
+         * The fields of an object whose field names have been checked.
+         *
+         * @param node the object
+         */
+        public Fields(Node node) {
             this.node = node;
         }
 
-        Node required(String name) {
+        /**
+         * A field that must be there.
+         *
+         * @param name the name
+         * @return its value
+         * @throws MaterialFileException if it is missing
+         */
+        public Node required(String name) {
             Node n = node.fields.get(name);
             if (n == null) {
                 throw node.error("missing field \"" + name + "\"");
@@ -393,11 +539,23 @@ final class Node {
             return n;
         }
 
-        Node optional(String name) {
+        /**
+         * A field that may be missing.
+         *
+         * @param name the name
+         * @return its value, or null
+         */
+        public Node optional(String name) {
             return node.fields.get(name);
         }
 
-        boolean has(String name) {
+        /**
+         * Whether a field is there.
+         *
+         * @param name the name
+         * @return true if it is
+         */
+        public boolean has(String name) {
             return node.fields.containsKey(name);
         }
     }

@@ -1,0 +1,428 @@
+/*
+ * Copyright 2026 The shield authors. Licensed under the Apache License, Version 2.0.
+ */
+package io.shieldmath.shield.axisymmetric.files;
+
+import io.shieldmath.shield.axisymmetric.Arrangement;
+import io.shieldmath.shield.axisymmetric.AxialFieldShielding;
+import io.shieldmath.shield.axisymmetric.Body;
+import io.shieldmath.shield.axisymmetric.CoilCoupling;
+import io.shieldmath.shield.coupling.AmplitudeMeasure;
+import io.shieldmath.shield.coupling.CoilPair;
+import io.shieldmath.shield.design.Requirement;
+import io.shieldmath.shield.internal.Require;
+import io.shieldmath.shield.materials.internal.Spelling;
+import io.shieldmath.shield.model.ShieldingModel;
+import io.shieldmath.shield.quantity.CurrentAmplitude;
+import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.quantity.FrequencyBand;
+import io.shieldmath.shield.quantity.Length;
+import io.shieldmath.shield.quantity.MagneticFluxDensity;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * A whole axisymmetric design: finite bodies of revolution on one axis, either between a
+ * transmitter and a receiver coil or in a uniform axial applied field read over a sensor
+ * region, the band and number of points to evaluate, the mesh tolerance, and every source
+ * case the design must meet.
+ *
+ * <pre>{@code
+ * Catalogue cat = Catalogue.builtIn();
+ * AxisymmetricDesign d = AxisymmetricDesign.inUniformAxialField(
+ *         List.of(DesignBody.can("can", cat.get("nickel-iron-80"), mm(20), mm(1), mm(60))
+ *                 .withCapHole(CanEnd.UPPER, mm(3))),
+ *         DesignSensor.cylinder(mm(5), mm(10)), FrequencyBand.parse("10 Hz to 1 kHz"), 5)
+ *     .withTolerance(Decibels.of(0.1))
+ *     .meeting(Requirement.none().plus(FrequencyBand.parse("49 Hz to 51 Hz"), uT(40), nT(100)))
+ *     .withTitle("sensor can");
+ * WholeDesignFile.write(WholeDesign.of(d), Path.of("can.json"));
+ * double se = d.model().shieldingEffectivenessDb(50);           // the same number the batch prints
+ * }</pre>
+ *
+ * <p>{@link #model()} is the evaluation behind the common contract: a {@link CoilCoupling}
+ * (insertion loss between the coils) or an {@link AxialFieldShielding} (the worst shielding
+ * over the sensor region). Results are estimates for idealised geometry and must be verified
+ * by measurement.
+ *
+ * <p>Immutable and thread-safe; equality is by value, the texts a design read from a file gave
+ * its quantities in included. The {@code with…} and {@code meeting} methods return a copy.
+ */
+public final class AxisymmetricDesign {
+
+    /** The most evaluation points. */
+    public static final int MAX_POINTS = CoilCoupling.MAX_SWEEP_POINTS;
+
+    private final String title;
+    private final List<DesignBody> bodies;
+    private final DesignCoil transmitter;
+    private final DesignCoil receiver;
+    private final Length separation;
+    private final CoilPair coils;
+    private final CurrentAmplitude drive;
+    private final AmplitudeMeasure driveMeasure;
+    private final DesignSensor sensor;
+    private final MagneticFluxDensity applied;
+    private final Decibels tolerance;
+    private final FrequencyBand band;
+    private final int points;
+    private final Requirement requirement;
+    private final Spelling spelling;
+    private final Arrangement arrangement;
+    private final ShieldingModel<?> model;
+
+    private AxisymmetricDesign(String title, List<DesignBody> bodies, DesignCoil transmitter, DesignCoil receiver,
+                               Length separation, CurrentAmplitude drive,
+                               AmplitudeMeasure driveMeasure, DesignSensor sensor, MagneticFluxDensity applied,
+                               Decibels tolerance, FrequencyBand band, int points, Requirement requirement,
+                               Spelling spelling, Arrangement arrangement) {
+        this.title = title;
+        this.bodies = bodies;
+        this.transmitter = transmitter;
+        this.receiver = receiver;
+        this.separation = separation;
+        this.coils = transmitter == null ? null
+                : CoilPair.coaxial(transmitter.coil(), receiver.coil(), separation);
+        this.drive = drive;
+        this.driveMeasure = driveMeasure;
+        this.sensor = sensor;
+        this.applied = applied;
+        this.tolerance = tolerance;
+        this.band = band;
+        this.points = points;
+        this.requirement = requirement;
+        this.spelling = spelling;
+        this.arrangement = arrangement;
+        this.model = buildModel();
+    }
+
+    private ShieldingModel<?> buildModel() {
+        if (coils != null) {
+            CoilCoupling c = arrangement.between(coils);
+            return tolerance == null ? c : c.withTolerance(tolerance);
+        }
+        AxialFieldShielding s = arrangement.inUniformAxialField().sensing(sensor.region());
+        return tolerance == null ? s : s.withTolerance(tolerance);
+    }
+
+    private static Arrangement arrangementOf(List<DesignBody> bodies) {
+        List<Body> list = new ArrayList<>(bodies.size());
+        for (DesignBody b : bodies) {
+            list.add(Require.nonNull("body", b).body());
+        }
+        return Arrangement.of(list);
+    }
+
+    private static AxisymmetricDesign checked(AxisymmetricDesign d) {
+        FrequencyBand valid = d.model.validBand();
+        Require.inRange("band lower frequency", d.band.low().toHertz(), valid.low().toHertz(), valid.high().toHertz(),
+                "Hz");
+        Require.inRange("band upper frequency", d.band.high().toHertz(), valid.low().toHertz(),
+                valid.high().toHertz(), "Hz");
+        Require.inRange("points", d.points, 1, MAX_POINTS, "points");
+        return d;
+    }
+
+    /**
+     * A design of bodies between a transmitter and a receiver coil: evaluated as the insertion
+     * loss 20·log10|M0/M| of the coils' mutual inductance.
+     *
+     * @param bodies      the bodies, none null, with different names and not overlapping; none for free space
+     * @param transmitter the driven coil, centred at z = −separation/2, not null
+     * @param receiver    the receiving coil, centred at z = +separation/2, not null
+     * @param separation  the distance between the coils' centre planes, not null
+     * @param band        the band to evaluate, within the quasi-static limit of the geometry, not null
+     * @param points      the number of log-spaced points, 1 to {@value #MAX_POINTS}
+     * @return the design
+     * @throws IllegalArgumentException if bodies share a name or overlap, a coil cuts a body, or the
+     *                                  coils' windings come too close (see {@link CoilPair})
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the band or points are out of range
+     */
+    public static AxisymmetricDesign betweenCoils(List<DesignBody> bodies, DesignCoil transmitter,
+                                                  DesignCoil receiver, Length separation, FrequencyBand band,
+                                                  int points) {
+        List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
+        return checked(new AxisymmetricDesign("", b, Require.nonNull("transmitter", transmitter),
+                Require.nonNull("receiver", receiver), Require.nonNull("separation", separation), null, null, null,
+                null, null,
+                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b)));
+    }
+
+    /**
+     * A design of bodies in a uniform axial applied field, evaluated as the worst shielding
+     * over the sensor region.
+     *
+     * @param bodies the bodies, none null, with different names and not overlapping
+     * @param sensor where the field is read, not null
+     * @param band   the band to evaluate, within the quasi-static limit of the geometry, not null
+     * @param points the number of log-spaced points, 1 to {@value #MAX_POINTS}
+     * @return the design
+     * @throws IllegalArgumentException if bodies share a name or overlap
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the band or points are out of range
+     */
+    public static AxisymmetricDesign inUniformAxialField(List<DesignBody> bodies, DesignSensor sensor,
+                                                         FrequencyBand band, int points) {
+        List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
+        return checked(new AxisymmetricDesign("", b, null, null, null, null, null, Require.nonNull("sensor", sensor),
+                null, null,
+                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b)));
+    }
+
+    private AxisymmetricDesign copy(String t, CurrentAmplitude dr, AmplitudeMeasure dm, MagneticFluxDensity ap,
+                                    Decibels tol, Requirement req, Spelling sp) {
+        return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, ap, tol, band,
+                points, req, sp, arrangement);
+    }
+
+    /**
+     * A copy with a title.
+     *
+     * @param newTitle the title, at most 200 characters without control characters; empty for none
+     * @return the new design; this one is unchanged
+     * @throws IllegalArgumentException if the title is too long or holds control characters
+     */
+    public AxisymmetricDesign withTitle(String newTitle) {
+        Require.nonNull("title", newTitle);
+        String t = newTitle.isBlank() ? "" : Require.text("design title", newTitle, 200);
+        return t.equals(title) ? this : copy(t, drive, driveMeasure, applied, tolerance, requirement, spelling);
+    }
+
+    /**
+     * A copy with the source cases the design must meet.
+     *
+     * @param newRequirement the bands, incident and tolerated flux densities, not null
+     * @return the new design; this one is unchanged
+     */
+    public AxisymmetricDesign meeting(Requirement newRequirement) {
+        Require.nonNull("requirement", newRequirement);
+        return copy(title, drive, driveMeasure, applied, tolerance, newRequirement, spelling);
+    }
+
+    /**
+     * A copy whose evaluation refines the mesh until two successive meshes agree within a
+     * tolerance (see {@link CoilCoupling#withTolerance(Decibels)}).
+     *
+     * @param newTolerance the tolerance, 0.001 dB to 10 dB, not null
+     * @return the new design; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the tolerance is out of range
+     */
+    public AxisymmetricDesign withTolerance(Decibels newTolerance) {
+        Require.inRange("tolerance", Require.nonNull("tolerance", newTolerance).toDb(), 0.001, 10, "dB");
+        return copy(title, drive, driveMeasure, applied, newTolerance, requirement, spelling);
+    }
+
+    /**
+     * A copy with the transmitter's drive level (kept with the design for the field and loss
+     * figures; the insertion loss does not depend on it).
+     *
+     * @param current the current amplitude, not null
+     * @param measure how the amplitude is measured, not null
+     * @return the new design; this one is unchanged
+     * @throws IllegalStateException if this design is not between coils
+     */
+    public AxisymmetricDesign drivenAt(CurrentAmplitude current, AmplitudeMeasure measure) {
+        if (coils == null) {
+            throw new IllegalStateException("a drive level belongs to a design between coils; this one is in an "
+                    + "applied field (give its level with withAppliedField)");
+        }
+        return copy(title, Require.nonNull("current", current), Require.nonNull("measure", measure), applied,
+                tolerance, requirement, spelling);
+    }
+
+    /**
+     * A copy with the level of the applied field (kept with the design for the field figures;
+     * the shielding does not depend on it in this linear model).
+     *
+     * @param level the flux density of the applied field, not null
+     * @return the new design; this one is unchanged
+     * @throws IllegalStateException if this design is between coils
+     */
+    public AxisymmetricDesign withAppliedField(MagneticFluxDensity level) {
+        if (coils != null) {
+            throw new IllegalStateException("an applied field level belongs to a design in an applied field; this "
+                    + "one is between coils (give its drive with drivenAt)");
+        }
+        return copy(title, drive, driveMeasure, Require.nonNull("level", level), tolerance, requirement, spelling);
+    }
+
+    AxisymmetricDesign spelledAs(Spelling newSpelling) {
+        return newSpelling.equals(spelling) ? this
+                : copy(title, drive, driveMeasure, applied, tolerance, requirement, newSpelling);
+    }
+
+    Spelling spelling() {
+        return spelling;
+    }
+
+    /**
+     * The evaluation through the common contract: a {@link CoilCoupling} between the coils or an
+     * {@link AxialFieldShielding} over the sensor region, with the tolerance if one is given.
+     * Equal designs give equal models, and equal models bit-identical results.
+     *
+     * @return the model
+     */
+    public ShieldingModel<?> model() {
+        return model;
+    }
+
+    /**
+     * The bodies for the solver.
+     *
+     * @return the arrangement
+     */
+    public Arrangement arrangement() {
+        return arrangement;
+    }
+
+    /**
+     * The title.
+     *
+     * @return the title, empty if none
+     */
+    public String title() {
+        return title;
+    }
+
+    /**
+     * The bodies as given.
+     *
+     * @return an unmodifiable list
+     */
+    public List<DesignBody> bodies() {
+        return bodies;
+    }
+
+    /**
+     * The coils, for a design between coils.
+     *
+     * @return the coils, or empty in an applied field
+     */
+    public Optional<CoilPair> coils() {
+        return Optional.ofNullable(coils);
+    }
+
+    /**
+     * The transmitter coil as given, for a design between coils.
+     *
+     * @return the coil, or empty in an applied field
+     */
+    public Optional<DesignCoil> transmitter() {
+        return Optional.ofNullable(transmitter);
+    }
+
+    /**
+     * The receiver coil as given, for a design between coils.
+     *
+     * @return the coil, or empty in an applied field
+     */
+    public Optional<DesignCoil> receiver() {
+        return Optional.ofNullable(receiver);
+    }
+
+    /**
+     * The distance between the coils' centre planes, for a design between coils.
+     *
+     * @return the separation, or empty in an applied field
+     */
+    public Optional<Length> separation() {
+        return Optional.ofNullable(separation);
+    }
+
+    /**
+     * The transmitter's drive current amplitude, if given.
+     *
+     * @return the amplitude, or empty
+     */
+    public Optional<CurrentAmplitude> drive() {
+        return Optional.ofNullable(drive);
+    }
+
+    /**
+     * How the drive amplitude is measured, if a drive is given.
+     *
+     * @return the measure, or empty
+     */
+    public Optional<AmplitudeMeasure> driveMeasure() {
+        return Optional.ofNullable(driveMeasure);
+    }
+
+    /**
+     * The sensor, for a design in an applied field.
+     *
+     * @return the sensor, or empty between coils
+     */
+    public Optional<DesignSensor> sensor() {
+        return Optional.ofNullable(sensor);
+    }
+
+    /**
+     * The applied field's level, if given.
+     *
+     * @return the flux density, or empty
+     */
+    public Optional<MagneticFluxDensity> appliedField() {
+        return Optional.ofNullable(applied);
+    }
+
+    /**
+     * The mesh tolerance, if given.
+     *
+     * @return the tolerance, or empty for one solve on the default mesh
+     */
+    public Optional<Decibels> tolerance() {
+        return Optional.ofNullable(tolerance);
+    }
+
+    /**
+     * The band to evaluate.
+     *
+     * @return the band
+     */
+    public FrequencyBand band() {
+        return band;
+    }
+
+    /**
+     * The number of log-spaced points.
+     *
+     * @return 1 to {@value #MAX_POINTS}
+     */
+    public int points() {
+        return points;
+    }
+
+    /**
+     * The source cases the design must meet.
+     *
+     * @return the requirement, {@link Requirement#none()} if none is given
+     */
+    public Requirement requirement() {
+        return requirement;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof AxisymmetricDesign d && d.title.equals(title) && d.bodies.equals(bodies)
+                && Objects.equals(d.transmitter, transmitter) && Objects.equals(d.receiver, receiver)
+                && Objects.equals(d.separation, separation) && Objects.equals(d.drive, drive) && d.driveMeasure == driveMeasure
+                && Objects.equals(d.sensor, sensor) && Objects.equals(d.applied, applied)
+                && Objects.equals(d.tolerance, tolerance) && d.band.equals(band) && d.points == points
+                && d.requirement.equals(requirement) && d.spelling.equals(spelling);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor, applied, tolerance, band, points,
+                requirement, spelling);
+    }
+
+    @Override
+    public String toString() {
+        return (title.isEmpty() ? "axisymmetric design" : title) + ": " + bodies
+                + (coils != null ? " between " + coils : " in a uniform axial field, " + sensor) + ", " + band + ", "
+                + points + " points" + (tolerance == null ? "" : ", tolerance " + tolerance)
+                + (requirement.entries().isEmpty() ? "" : ", " + requirement);
+    }
+}
