@@ -18,6 +18,12 @@ import io.shieldmath.shield.axisymmetric.EstimatedValue;
 import io.shieldmath.shield.axisymmetric.SaturationSolution;
 import io.shieldmath.shield.axisymmetric.SaturationStudy;
 import io.shieldmath.shield.axisymmetric.SensorRegion;
+import io.shieldmath.shield.axisymmetric.files.AxisymmetricDesign;
+import io.shieldmath.shield.axisymmetric.files.DesignBody;
+import io.shieldmath.shield.axisymmetric.files.DesignCoil;
+import io.shieldmath.shield.axisymmetric.files.DesignSensor;
+import io.shieldmath.shield.axisymmetric.files.WholeDesign;
+import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
 import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.coupling.Coil;
 import io.shieldmath.shield.coupling.DriveCurrent;
@@ -27,11 +33,6 @@ import io.shieldmath.shield.design.Requirement;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.MagnetizationCurves;
 import io.shieldmath.shield.materials.Material;
-import io.shieldmath.shield.materials.files.Design;
-import io.shieldmath.shield.materials.files.DesignFile;
-import io.shieldmath.shield.materials.files.DesignLayer;
-import io.shieldmath.shield.field.ImpedanceForm;
-import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
@@ -108,6 +109,8 @@ public final class DesignStudy {
     static final double FINENESS = 0.5;
     /** The frequencies of the sweep table and plot besides the requirement's. */
     static final double[] SWEEP_HZ = {10, 100, 500, 2e3, 5e3, 1e4, 1e5, 2e5};
+    /** The points of the written design's own sweep, 10 Hz to 200 kHz. */
+    static final int DESIGN_POINTS = 19;
     /** The SE chart's size in pixels. */
     static final int CHART_WIDTH = 1000;
     static final int CHART_HEIGHT = 680;
@@ -137,12 +140,16 @@ public final class DesignStudy {
      * @param massGrams  its mass
      * @param solved     true for the solver's finite shields, false for infinite-sheet comparisons
      * @param seAt       SE in dB with its discretisation estimate at a frequency in Hz
-     * @param arrangement the bodies (finite shields), or null
+     * @param bodies     the bodies as a design file holds them (finite shields), or null
      * @param evaluation the solver evaluation at the charger's frequencies (or the can's), or null
      * @param material   a can's material, or null
      */
     record Candidate(String kind, String name, double massGrams, boolean solved, DoubleFunction<EstimatedValue> seAt,
-                     Arrangement arrangement, ShieldingModel<?> evaluation, Material material) {
+                     List<DesignBody> bodies, ShieldingModel<?> evaluation, Material material) {
+
+        Arrangement arrangement() {
+            return arrangementOf(bodies);
+        }
 
         String label() {
             return kind + ": " + name;
@@ -223,11 +230,11 @@ public final class DesignStudy {
 
         List<Candidate> candidates = new ArrayList<>();
         // Round plates between each source and the sensor, and the same plates as infinite sheets.
-        candidates.addAll(plate("aluminium 6061, 2 mm", List.of(Layer.of(aluminium, mm(2))), aluminium));
-        candidates.addAll(plate("copper, 1 mm", List.of(Layer.of(copper, mm(1))), copper));
-        candidates.addAll(plate("80 % nickel-iron, 1 mm", List.of(Layer.of(nickelIron, mm(1))), nickelIron));
-        candidates.addAll(plate("Cu 0.5 mm | gap 1 mm | Ni-Fe 0.5 mm", List.of(Layer.of(copper, mm(0.5)),
-                Layer.gap(mm(1)), Layer.of(nickelIron, mm(0.5))), copper, nickelIron));
+        candidates.addAll(plate("aluminium 6061, 2 mm", List.of(new Sheet(aluminium, mm(2)))));
+        candidates.addAll(plate("copper, 1 mm", List.of(new Sheet(copper, mm(1)))));
+        candidates.addAll(plate("80 % nickel-iron, 1 mm", List.of(new Sheet(nickelIron, mm(1)))));
+        candidates.addAll(plate("Cu 0.5 mm | gap 1 mm | Ni-Fe 0.5 mm", List.of(new Sheet(copper, mm(0.5)),
+                new Sheet(null, mm(1)), new Sheet(nickelIron, mm(0.5)))));
         // Cans around the sensor in the ambient field, taken along the can's axis.
         candidates.add(can("Ni-Fe 1 mm, capped, cable hole", nickelIron, mm(1), true));
         candidates.add(can("Ni-Fe 0.5 mm, capped, cable hole", nickelIron, mm(0.5), true));
@@ -280,8 +287,7 @@ public final class DesignStudy {
     private static List<String> writeFieldMaps(Path folder, Material copper, Evaluated best, Requirement need)
             throws IOException {
         List<String> written = new ArrayList<>();
-        List<Layer> plate = List.of(Layer.of(copper, mm(1)));
-        Arrangement bench = plateBodies(plate, CHARGER_DISTANCE);
+        Arrangement bench = arrangementOf(plateBodies(List.of(new Sheet(copper, mm(1))), CHARGER_DISTANCE));
         CoilPair pair = coils(true);
         Frequency f = kHz(20);
         FieldMapPicture benchMap = FieldMapPicture.around(bench, pair,
@@ -319,44 +325,64 @@ public final class DesignStudy {
     }
 
     /**
-     * The bodies of a plate or stack, source side first, its centre {@link #PLATE_TO_SENSOR}
-     * in front of the sensor between coils of the given separation.
+     * One layer of a plate or stack, source side first.
+     *
+     * @param material  the layer's material, or null for an air gap
+     * @param thickness its thickness
      */
-    static Arrangement plateBodies(List<Layer> layers, Length separation) {
-        double total = layers.stream().mapToDouble(l -> l.thickness().toMetres()).sum();
+    record Sheet(Material material, Length thickness) {
+
+        Layer layer() {
+            return material == null ? Layer.gap(thickness) : Layer.of(material, thickness);
+        }
+    }
+
+    /**
+     * The bodies of a plate or stack, source side first, its centre {@link #PLATE_TO_SENSOR}
+     * in front of the sensor between coils of the given separation: round plates of
+     * {@link #PLATE_RADIUS}, the gaps left as air.
+     */
+    static List<DesignBody> plateBodies(List<Sheet> sheets, Length separation) {
+        double total = sheets.stream().mapToDouble(l -> l.thickness().toMetres()).sum();
         // The sensor sits at +separation/2; the stack's centre PLATE_TO_SENSOR before it.
         double z = separation.toMetres() / 2 - PLATE_TO_SENSOR.toMetres() - total / 2;
-        List<Body> bodies = new ArrayList<>();
-        for (int i = 0; i < layers.size(); i++) {
-            Layer l = layers.get(i);
-            if (!l.isGap()) {
-                Body b = Body.disc(i == 0 ? "plate" : "plate layer " + (i + 1), l.medium(), PLATE_RADIUS, l.thickness());
+        List<DesignBody> bodies = new ArrayList<>();
+        for (int i = 0; i < sheets.size(); i++) {
+            Sheet l = sheets.get(i);
+            if (l.material() != null) {
+                DesignBody b = DesignBody.disc(i == 0 ? "plate" : "plate layer " + (i + 1), l.material(), PLATE_RADIUS,
+                        l.thickness());
                 double centre = z + l.thickness().toMetres() / 2;
                 bodies.add(centre >= 0 ? b.shiftedBy(Length.ofMetres(centre)) : b.shiftedBackBy(Length.ofMetres(-centre)));
             }
             z += l.thickness().toMetres();
         }
-        return Arrangement.of(bodies);
+        return List.copyOf(bodies);
+    }
+
+    static Arrangement arrangementOf(List<DesignBody> bodies) {
+        return Arrangement.of(bodies.stream().map(DesignBody::body).toList());
     }
 
     /** A finite plate (or stack) computed by the solver, and the same layers as an infinite sheet. */
-    private static List<Candidate> plate(String name, List<Layer> layers, Material... materials) {
-        String kind = layers.size() > 1 ? "stack" : "plate";
+    private static List<Candidate> plate(String name, List<Sheet> sheets) {
+        String kind = sheets.size() > 1 ? "stack" : "plate";
         double mass = 0;
-        int m = 0;
-        for (Layer l : layers) {
-            if (!l.isGap()) {
-                mass += materials[m++].arealMass(l.thickness()).toKilogramsPerSquareMetre()
+        for (Sheet l : sheets) {
+            if (l.material() != null) {
+                mass += l.material().arealMass(l.thickness()).toKilogramsPerSquareMetre()
                         * Math.PI * Math.pow(PLATE_RADIUS.toMetres(), 2) * 1000;
             }
         }
-        CoilCoupling near = plateBodies(layers, CHARGER_DISTANCE).between(coils(true)).withFineness(FINENESS);
-        CoilCoupling far = plateBodies(layers, TRANSFORMER_DISTANCE).between(coils(false)).withFineness(FINENESS);
+        List<DesignBody> nearBodies = plateBodies(sheets, CHARGER_DISTANCE);
+        CoilCoupling near = arrangementOf(nearBodies).between(coils(true)).withFineness(FINENESS);
+        CoilCoupling far = arrangementOf(plateBodies(sheets, TRANSFORMER_DISTANCE)).between(coils(false))
+                .withFineness(FINENESS);
         Candidate finite = new Candidate(kind, name + String.format(Locale.ROOT, ", %.0f mm across",
                 2 * PLATE_RADIUS.toMetres() * 1e3), mass, true,
                 hz -> (hz < SOURCE_SPLIT_HZ ? far : near).at(Frequency.ofHertz(hz)).insertionLossEstimated(),
-                plateBodies(layers, CHARGER_DISTANCE), near, null);
-        Barrier barrier = Barrier.of(layers);
+                nearBodies, near, null);
+        Barrier barrier = Barrier.of(sheets.stream().map(Sheet::layer).toList());
         CouplingEvaluation sheetNear = coils(true).through(barrier);
         CouplingEvaluation sheetFar = coils(false).through(barrier);
         Candidate sheet = new Candidate(kind, name, mass, false,
@@ -371,12 +397,11 @@ public final class DesignStudy {
      * open tube.
      */
     private static Candidate can(String name, Material material, Length wall, boolean capped) {
-        Body body = Body.can("can", material, CAN_RADIUS, wall, CAN_LENGTH);
+        DesignBody body = DesignBody.can("can", material, CAN_RADIUS, wall, CAN_LENGTH);
         body = capped ? body.withCapHole(CanEnd.UPPER, CABLE_HOLE) : body.withoutCap(CanEnd.LOWER).withoutCap(CanEnd.UPPER);
-        Arrangement a = Arrangement.of(body);
-        AxialFieldShielding e = a.inUniformAxialField().sensing(SENSOR).withFineness(FINENESS);
+        AxialFieldShielding e = arrangementOf(List.of(body)).inUniformAxialField().sensing(SENSOR).withFineness(FINENESS);
         return new Candidate("can", name, canMassGrams(material, wall, capped), true,
-                hz -> e.at(Frequency.ofHertz(hz)).worstShieldingDb(), a, e, material);
+                hz -> e.at(Frequency.ofHertz(hz)).worstShieldingDb(), List.of(body), e, material);
     }
 
     /** A can's mass: the tube between the caps, two caps, less the cable hole (or an open tube). */
@@ -581,23 +606,22 @@ public final class DesignStudy {
     }
 
     /**
-     * Writes the recommended design. Version 2 of the design file holds only a planar stack in
-     * an incident field, so a can is written as its wall in the charger's near field: the can's
-     * shape, its cable hole and the transformer case are lost (the gap this study reports).
+     * Writes the recommended design as a whole design (version 3 of the design file): the
+     * can and the sensor region in the ambient field, or the plate between the charger coil
+     * and the sensor, with every band of the requirement as a source case and the study's mesh
+     * fineness, so that the file evaluates to the numbers the study printed.
      */
     private static void writeDesign(Evaluated best, Requirement need, Path file) throws IOException {
-        List<DesignLayer> wall = new ArrayList<>();
-        Material m = best.candidate().material();
-        if (m == null) {
-            return;
-        }
-        Body can = best.candidate().arrangement().bodies().get(0);
-        wall.add(DesignLayer.of(m, best.candidate().name().contains("0.5 mm") ? mm(0.5)
-                : best.candidate().name().contains("2 mm") ? mm(2) : mm(1)));
-        Design d = Design.of(wall, IncidentField.magneticNearField(CHARGER_DISTANCE, ImpedanceForm.EXACT_DIPOLE),
-                FrequencyBand.of(Hz(10), kHz(200)), 61).withTitle(best.candidate().label() + " (" + can.name()
-                + " wall only: version 2 of the design file cannot hold the can)");
-        DesignFile.write(d, file);
+        Candidate c = best.candidate();
+        FrequencyBand band = FrequencyBand.of(Hz(10), kHz(200));
+        AxisymmetricDesign d = c.kind().equals("can")
+                ? AxisymmetricDesign.inUniformAxialField(c.bodies(), DesignSensor.cylinder(mm(3), mm(10)), band,
+                        DESIGN_POINTS)
+                : AxisymmetricDesign.betweenCoils(c.bodies(), DesignCoil.loop(CHARGER.radius(), CHARGER.turns()),
+                        DesignCoil.loop(SENSOR_LOOP.radius(), SENSOR_LOOP.turns()), CHARGER_DISTANCE, band,
+                        DESIGN_POINTS);
+        WholeDesignFile.write(WholeDesign.of(d.withFineness(FINENESS).meeting(need)
+                .withTitle(c.label() + " (magnetometer board study)")), file);
     }
 
     private static void printCautions(PrintStream out) {

@@ -11,6 +11,9 @@ import io.shieldmath.shield.axisymmetric.Arrangement;
 import io.shieldmath.shield.axisymmetric.Body;
 import io.shieldmath.shield.axisymmetric.CanEnd;
 import io.shieldmath.shield.axisymmetric.SensorRegion;
+import io.shieldmath.shield.axisymmetric.files.AxisymmetricDesign;
+import io.shieldmath.shield.axisymmetric.files.WholeDesign;
+import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
 import io.shieldmath.shield.design.Requirement;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.model.ShieldingModel;
@@ -51,7 +54,8 @@ class DesignStudyTest {
     @Test
     void everyFileIsWrittenAndTheReportCarriesTheCautions() throws IOException {
         for (String f : new String[] {"sweeps.csv", "chosen-design.json", "se-vs-frequency.png",
-            "se-vs-frequency.svg"}) {
+            "se-vs-frequency.svg", "field-map-bench.png", "field-map-bench.svg", "field-map-can.png",
+            "field-map-can.svg"}) {
             Path p = dir.resolve(f);
             assertTrue(Files.exists(p) && Files.size(p) > 100, f + " missing or empty");
         }
@@ -93,6 +97,17 @@ class DesignStudyTest {
         Requirement.Entry band = outcome.requirement().entries().stream()
                 .filter(e -> e.band().contains(outcome.worstFrequency())).findFirst().orElseThrow();
         assertTrue(se >= band.requiredDb(), band + ": " + se);
+    }
+
+    @Test
+    void theWrittenDesignIsTheWholeCanAndEvaluatesToThePrintedNumber() throws IOException {
+        WholeDesign d = WholeDesignFile.read(outcome.designFile(), Catalogue.builtIn());
+        assertEquals(WholeDesign.Kind.AXISYMMETRIC, d.kind());
+        AxisymmetricDesign a = d.axisymmetric().orElseThrow();
+        assertEquals(outcome.recommendedModel(), a.model(), "the file must hold the can, its hole, sensor and mesh");
+        assertEquals(outcome.requirement(), a.requirement(), "the file must hold every source case");
+        // The library on the file gives the study's number, bit for bit (equal inputs, equal results).
+        assertEquals(outcome.worstSeDb(), d.model().shieldingEffectivenessDb(outcome.worstFrequency().toHertz()), 0);
     }
 
     @Test
