@@ -74,7 +74,9 @@ import java.util.function.DoubleFunction;
  * against the requirement and recommends the lightest that meets it. The same plates as
  * infinite sheets between the same coils are computed beside them, as a separate, labelled
  * comparison that is never recommended. It writes into an output folder a CSV of the results,
- * the recommended design as a file, and plots (PNG and SVG).
+ * the whole recommended design as a design file (version 3, with the study's mesh fineness, so
+ * that it evaluates to the printed numbers), the SE plot, and field maps of the bench case and
+ * of the recommended can (PNG and SVG).
  *
  * <p>Solves run on {@link Runtime#availableProcessors()} threads; results do not depend on the
  * number of threads (the solver gives bit-identical results for equal inputs).
@@ -292,8 +294,8 @@ public final class DesignStudy {
         Frequency f = kHz(20);
         FieldMapPicture benchMap = FieldMapPicture.around(bench, pair,
                         bench.between(pair).withFineness(FINENESS).at(f), DriveCurrent.ofAmperes(1, AmplitudeMeasure.PEAK, f))
-                .titled(String.format(Locale.ROOT, "Copper plate, 1 mm, %.0f mm across, between the charger coil and the "
-                        + "sensor at 20 kHz (1 A peak; illustrative)", 2 * PLATE_RADIUS.toMetres() * 1e3));
+                .titled(String.format(Locale.ROOT, "Copper plate 1 mm, %.0f mm across, charger coil to sensor, 20 kHz "
+                        + "(1 A peak; illustrative)", 2 * PLATE_RADIUS.toMetres() * 1e3));
         benchMap.writePng(folder.resolve("field-map-bench.png"), MAP_WIDTH, MAP_HEIGHT);
         benchMap.writeSvg(folder.resolve("field-map-bench.svg"), MAP_WIDTH, MAP_HEIGHT);
         written.add("field-map-bench.png");
