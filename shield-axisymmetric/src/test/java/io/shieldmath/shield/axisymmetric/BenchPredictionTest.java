@@ -85,6 +85,18 @@ class BenchPredictionTest {
     }
 
     @Test
+    void aPlateEightCoilRadiiWideReadsTheInfiniteSheet() {
+        // Against the exact infinite-sheet coupling (Moser, IEEE Trans. EMC 9 (1967)): a plate far wider
+        // than the coils leaves no path round its rim, so the sheet sits less than 0.1 dB above it (the
+        // limit the solver's wide-disc agreement test keeps). Invented bench: 25-turn loops of 10 mm radius,
+        // 40 mm apart, 0.5 mm copper (about 0.76 skin depths at 10 kHz), plate radius 80 mm.
+        CoilPair pair = CoilPair.coaxial(Coil.loop(mm(10), 25), Coil.loop(mm(10), 25), mm(40));
+        PredictedReading wide = BenchPrediction.ofPlate(Catalogue.builtIn().get("copper-annealed"), mm(80), mm(0.5),
+                pair).at(kHz(10));
+        assertEquals(0, wide.infiniteSheetAboveDb(), 0.1, wide::toString);
+    }
+
+    @Test
     void theVoltagesToExpectFollowTheLossAndMaxwellsMutualInductance() {
         DriveCurrent drive = DriveCurrent.ofMilliamperes(100, AmplitudeMeasure.RMS, kHz(10));
         double without = AT_10_KHZ.voltageWithoutPlate(drive).volts(AmplitudeMeasure.PEAK);
