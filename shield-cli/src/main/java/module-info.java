@@ -3,12 +3,13 @@
  */
 
 /**
- * shield-cli: the {@code shield-batch} command, which evaluates a JSON design file at
+ * shield-cli: the {@code shield-batch} command, which evaluates a JSON design file of any kind at
  * frequencies and prints CSV or JSON for instrument software and scripts. Its entry point
  * is {@link io.shieldmath.shield.cli.BatchCommand}.
  */
 module io.shieldmath.shield.cli {
     requires io.shieldmath.shield.materials;
+    requires io.shieldmath.shield.axisymmetric;
 
     exports io.shieldmath.shield.cli;
 }

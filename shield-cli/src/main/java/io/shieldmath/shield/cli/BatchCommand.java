@@ -3,13 +3,11 @@
  */
 package io.shieldmath.shield.cli;
 
+import io.shieldmath.shield.axisymmetric.files.WholeDesign;
+import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.materials.files.Design;
 import io.shieldmath.shield.materials.files.CatalogueFile;
-import io.shieldmath.shield.materials.files.DesignFile;
 import io.shieldmath.shield.materials.files.MaterialFileException;
-import io.shieldmath.shield.planar.PlanarEvaluation;
-import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.InvalidQuantityException;
@@ -24,7 +22,7 @@ import java.util.Objects;
 
 /**
  * The {@code shield-batch} command, for instrument software and scripts: evaluates a JSON
- * design file at frequencies and prints CSV or JSON to standard output.
+ * design file of any kind at frequencies and prints CSV or JSON to standard output.
  *
  * <pre>
  * shield-batch --design FILE [--catalogue FILE] [--band "10 Hz to 100 kHz" --points N | --stdin]
@@ -33,6 +31,21 @@ import java.util.Objects;
  *
  * <p>Run it with {@code java -jar shield-all.jar ...} (the shaded jar of shield-examples) or
  * {@code java -cp ... io.shieldmath.shield.cli.BatchCommand ...}.
+ *
+ * <p>Every kind of design file is evaluated (versions 1 to 3, read by
+ * {@link WholeDesignFile}): a planar stack (columns {@code frequency_hz, se_db, absorption_db,
+ * reflection_db, multiple_reflection_db}), a closed shell with its openings ({@code frequency_hz,
+ * se_db}), and an axisymmetric arrangement between coils or in an applied axial field
+ * ({@code frequency_hz, se_db, discretisation_estimate_db}: the insertion loss or the worst
+ * shielding over the sensor region, and the change between the last two meshes; each frequency
+ * is solved on its own, exactly as {@code WholeDesign.model().at(frequency)} solves it, so the
+ * numbers equal the library's). Every column name ends in its unit. The JSON header object
+ * names the design, its kind and the field or source it faces.
+ *
+ * <p>Once a run has taken more than about a second (finite-element solves take from a tenth of
+ * a second to several seconds per frequency), a short line per frequency done goes to standard
+ * error, such as {@code shield-batch: frequency 3 of 21 (2500 Hz) done, 1.4 s}; standard output
+ * holds only the results.
  *
  * <p>Without {@code --band} or {@code --stdin} the design's own band and points are used;
  * {@code --points} alone uses the design's band, {@code --band} alone the design's points.
@@ -117,15 +130,13 @@ public final class BatchCommand {
     /** The command's name, at the start of every message. */
     static final String NAME = "shield-batch";
 
-    /** The evaluation range in words. */
-    private static final String RANGE = "from " + ResultOutput.shortest(PlanarEvaluation.MIN_HERTZ) + " Hz to "
-            + ResultOutput.shortest(PlanarEvaluation.MAX_HERTZ) + " Hz";
-
     private static final String USAGE_TEXT = "usage: shield-batch --design FILE [--catalogue FILE] "
             + "[--band \"10 Hz to 100 kHz\" --points N | --stdin] [--format csv|json]";
 
     private static final String HELP_TEXT = USAGE_TEXT + "\n       shield-batch --help | --version\n\n"
-            + "Evaluates a shield design file (JSON) at frequencies and writes CSV or JSON on standard output.\n\n"
+            + "Evaluates a shield design file (JSON) of any kind (planar stack, closed shell, axisymmetric\n"
+            + "arrangement) at frequencies and writes CSV or JSON on standard output, units in the column\n"
+            + "names. A run longer than about a second reports each frequency done on standard error.\n\n"
             + "  --design FILE     the design file (\"format\": \"shield-design\")\n"
             + "  --catalogue FILE  a catalogue file whose materials extend the built-in ones\n"
             + "  --band TEXT       a band such as \"10 Hz to 100 kHz\" (default: the design's)\n"
@@ -192,6 +203,11 @@ public final class BatchCommand {
      * @throws NullPointerException if an argument is null
      */
     public static int run(String[] args, InputStream in, OutputStream out, PrintStream err) {
+        return run(args, in, out, err, Progress.AFTER_NANOS);
+    }
+
+    /** {@link #run(String[], InputStream, OutputStream, PrintStream)} with progress lines after {@code progressAfterNanos}. */
+    static int run(String[] args, InputStream in, OutputStream out, PrintStream err, long progressAfterNanos) {
         Objects.requireNonNull(args, "args");
         Objects.requireNonNull(in, "in");
         Objects.requireNonNull(out, "out");
@@ -201,7 +217,7 @@ public final class BatchCommand {
                 ResultOutput.text(out, args[0].equals("--help") ? HELP_TEXT : NAME + " " + version() + "\n");
                 return OK;
             }
-            execute(Options.parse(args), in, out, err);
+            execute(Options.parse(args), in, out, err, progressAfterNanos);
             return OK;
         } catch (CommandFailure f) {
             if (f.getMessage() == null) {
@@ -219,25 +235,32 @@ public final class BatchCommand {
         }
     }
 
-    private static void execute(Options o, InputStream in, OutputStream out, PrintStream err)
+    private static void execute(Options o, InputStream in, OutputStream out, PrintStream err, long progressAfter)
             throws CommandFailure {
         FrequencyBand band = o.band() == null ? null : band(o.band());
-        Design design = readDesign(o);
-        PlanarEvaluation evaluation;
+        WholeDesign design = readDesign(o);
+        DesignEvaluation evaluation;
         try {
-            evaluation = design.barrier().facing(design.field());
+            evaluation = DesignEvaluation.of(design);
         } catch (IllegalArgumentException e) {
             throw CommandFailure.badInput("design file " + Messages.fileName(o.design()) + ": " + e.getMessage(), e);
         }
-        ResultOutput output = new ResultOutput(out, o.json(), design.title(), design.field().toString(), o.stdin());
+        if (band != null) {
+            checkBand(o.band(), band, evaluation);
+        }
+        ResultOutput output = new ResultOutput(out, o.json(), design.title(), evaluation.kind(), evaluation.field(),
+                o.stdin(), evaluation.columns());
+        Progress progress = new Progress(err, progressAfter);
         try {
             if (o.stdin()) {
-                fromStandardInput(evaluation, new LineInput(in, output::flush), output, err);
+                fromStandardInput(evaluation, new LineInput(in, output::flush), output, err, progress);
             } else {
                 FrequencyBand b = band != null ? band : design.band();
                 int points = o.points() > 0 ? o.points() : design.points();
-                for (double hz : b.logSpacedHertz(points)) {
-                    output.write(evaluate(evaluation, hz));
+                double[] all = b.logSpacedHertz(points);
+                for (int i = 0; i < all.length; i++) {
+                    output.write(all[i], evaluation.at(all[i]));
+                    progress.done("frequency " + (i + 1) + " of " + all.length, all[i]);
                 }
             }
             output.finish();
@@ -256,8 +279,8 @@ public final class BatchCommand {
      * {@value #BAD_INPUT}. Faults of the stream itself (not UTF-8, an over-long line, too many
      * lines, a read error) and output failures stop the run.
      */
-    private static void fromStandardInput(PlanarEvaluation evaluation, LineInput lines, ResultOutput output,
-            PrintStream err) throws CommandFailure {
+    private static void fromStandardInput(DesignEvaluation evaluation, LineInput lines, ResultOutput output,
+            PrintStream err, Progress progress) throws CommandFailure {
         long failed = 0;
         String line;
         while ((line = lines.next()) != null) {
@@ -265,9 +288,11 @@ public final class BatchCommand {
             if (s.isEmpty() || s.startsWith("#")) {
                 continue;
             }
-            PlanarResult result;
+            double hz;
+            double[] result;
             try {
-                result = evaluate(evaluation, frequencyHertz(s));
+                hz = frequencyHertz(s, evaluation.lowHz(), evaluation.highHz());
+                result = evaluation.at(hz);
             } catch (CommandFailure f) {
                 if (f.exitCode() != BAD_INPUT) {
                     throw f;
@@ -280,7 +305,8 @@ public final class BatchCommand {
                 failed++;
                 continue;
             }
-            output.write(result);
+            output.write(hz, result);
+            progress.done("standard input line " + lines.lineNumber(), hz);
         }
         if (failed > 0) {
             output.finish();
@@ -293,9 +319,14 @@ public final class BatchCommand {
 
     /**
      * A frequency in Hz from one line of input: a plain decimal number in Hz, or a number and a
-     * unit as {@link Frequency#parse(CharSequence)} reads them; within the evaluation range.
+     * unit as {@link Frequency#parse(CharSequence)} reads them; within the design's range.
      */
     static double frequencyHertz(String s) throws CommandFailure {
+        return frequencyHertz(s, LOWEST_HZ, HIGHEST_HZ);
+    }
+
+    /** {@link #frequencyHertz(String)} within a design's own range. */
+    static double frequencyHertz(String s, double lowHz, double highHz) throws CommandFailure {
         double hz;
         if (plainNumber(s)) {
             try {
@@ -313,9 +344,9 @@ public final class BatchCommand {
                 throw CommandFailure.badInput(m.contains(s) ? m : m + " (read from " + Messages.quote(s) + ")", e);
             }
         }
-        if (!(hz >= PlanarEvaluation.MIN_HERTZ && hz <= PlanarEvaluation.MAX_HERTZ)) {
+        if (!(hz >= lowHz && hz <= highHz)) {
             throw CommandFailure.badInput("frequency: " + Messages.quote(s) + " is out of range; allowed: "
-                    + RANGE, null);
+                    + range(lowHz, highHz), null);
         }
         return hz;
     }
@@ -336,6 +367,15 @@ public final class BatchCommand {
         return true;
     }
 
+    /** The range any design accepts at most (the planar model's), checked before the design is read. */
+    private static final double LOWEST_HZ = io.shieldmath.shield.planar.PlanarEvaluation.MIN_HERTZ;
+    private static final double HIGHEST_HZ = io.shieldmath.shield.planar.PlanarEvaluation.MAX_HERTZ;
+
+    /** A range of frequencies in words. */
+    private static String range(double lowHz, double highHz) {
+        return "from " + ResultOutput.shortest(lowHz) + " Hz to " + ResultOutput.shortest(highHz) + " Hz";
+    }
+
     private static FrequencyBand band(String text) throws CommandFailure {
         FrequencyBand b;
         try {
@@ -345,14 +385,25 @@ public final class BatchCommand {
         }
         double low = b.low().toHertz();
         double high = b.high().toHertz();
-        if (!(low >= PlanarEvaluation.MIN_HERTZ && high <= PlanarEvaluation.MAX_HERTZ)) {
-            throw CommandFailure.usage("--band: the " + (low < PlanarEvaluation.MIN_HERTZ ? "lower" : "upper")
-                    + " end of " + Messages.quote(text) + " is out of range; allowed: " + RANGE);
+        if (!(low >= LOWEST_HZ && high <= HIGHEST_HZ)) {
+            throw CommandFailure.usage("--band: the " + (low < LOWEST_HZ ? "lower" : "upper")
+                    + " end of " + Messages.quote(text) + " is out of range; allowed: " + range(LOWEST_HZ, HIGHEST_HZ));
         }
         return b;
     }
 
-    private static Design readDesign(Options o) throws CommandFailure {
+    /** The {@code --band} against the frequencies this design accepts (a finite body's quasi-static limit). */
+    private static void checkBand(String text, FrequencyBand b, DesignEvaluation evaluation) throws CommandFailure {
+        double low = b.low().toHertz();
+        double high = b.high().toHertz();
+        if (!(low >= evaluation.lowHz() && high <= evaluation.highHz())) {
+            throw CommandFailure.usage("--band: the " + (low < evaluation.lowHz() ? "lower" : "upper") + " end of "
+                    + Messages.quote(text) + " is out of range for this " + evaluation.kind() + " design; allowed: "
+                    + range(evaluation.lowHz(), evaluation.highHz()));
+        }
+    }
+
+    private static WholeDesign readDesign(Options o) throws CommandFailure {
         Catalogue catalogue = Catalogue.builtIn();
         if (o.catalogue() != null) {
             String name = "catalogue file " + Messages.fileName(o.catalogue());
@@ -368,23 +419,13 @@ public final class BatchCommand {
         }
         String name = "design file " + Messages.fileName(o.design());
         try (InputStream in = InputFiles.open("design file", o.design())) {
-            return DesignFile.read(in, catalogue);
+            return WholeDesignFile.read(in, catalogue);
         } catch (MaterialFileException | IllegalArgumentException e) {
             throw CommandFailure.badInput("bad " + name + ": " + e.getMessage(), e);
         } catch (UncheckedIOException e) {
             throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e.getCause()), e);
         } catch (IOException e) {
             throw CommandFailure.unreadable("cannot read " + name + ": " + InputFiles.reason(e), e);
-        }
-    }
-
-    private static PlanarResult evaluate(PlanarEvaluation evaluation, double hz)
-            throws CommandFailure {
-        try {
-            return evaluation.at(Frequency.ofHertz(hz));
-        } catch (ArithmeticException | IllegalArgumentException e) {
-            throw CommandFailure.badInput("cannot evaluate the design at " + ResultOutput.shortest(hz) + " Hz: "
-                    + e.getMessage(), e);
         }
     }
 

@@ -3,7 +3,6 @@
  */
 package io.shieldmath.shield.cli;
 
-import io.shieldmath.shield.planar.PlanarResult;
 import java.io.BufferedWriter;
 import java.io.FilterOutputStream;
 import java.io.IOException;
@@ -34,63 +33,88 @@ final class ResultOutput {
     /** The size of the output buffer, in characters. */
     static final int BUFFER_CHARS = 8192;
 
-    /** The CSV header line. */
+    /** The CSV header line of a planar design. */
     static final String CSV_HEADER = "frequency_hz,se_db,absorption_db,reflection_db,multiple_reflection_db";
 
     private final Writer writer;
     private final boolean json;
     private final boolean jsonLines;
     private final String title;
+    private final String kind;
     private final String field;
+    private final String[] columns;
     private long count;
     private long errors;
 
     /**
      * An output.
      *
-     * @param out   the stream; not closed by this class
-     * @param json  true for JSON, false for CSV
-     * @param title the design's title for the JSON form, or null
-     * @param field the incident field's description for the JSON form
-     * @param lines for JSON: one complete object per line (JSON Lines), as a co-process needs,
-     *              instead of one document that stays open until the input ends
+     * @param out     the stream; not closed by this class
+     * @param json    true for JSON, false for CSV
+     * @param title   the design's title for the JSON form, or null
+     * @param kind    the design's kind for the JSON form: planar, shell or axisymmetric
+     * @param field   the incident field's or source's description for the JSON form
+     * @param lines   for JSON: one complete object per line (JSON Lines), as a co-process needs,
+     *                instead of one document that stays open until the input ends
+     * @param columns the names of the values after {@code frequency_hz}, each ending in its unit
      */
-    ResultOutput(OutputStream out, boolean json, String title, String field, boolean lines) {
+    ResultOutput(OutputStream out, boolean json, String title, String kind, String field, boolean lines,
+                 String[] columns) {
         this.writer = new BufferedWriter(new OutputStreamWriter(new Checked(out), StandardCharsets.UTF_8),
                 BUFFER_CHARS);
         this.json = json;
         this.jsonLines = json && lines;
         this.title = title;
+        this.kind = kind;
         this.field = field;
+        this.columns = columns.clone();
     }
 
-    /** Writes one result, after the header if it is the first. */
-    void write(PlanarResult r) throws CommandFailure {
-        double hz = r.frequency().toHertz();
-        double se = finite("shielding effectiveness", r.shieldingEffectivenessDb(), hz);
-        double a = finite("absorption", r.absorptionDb(), hz);
-        double re = finite("reflection", r.reflectionDb(), hz);
-        double b = finite("multiple-reflection correction", r.multipleReflectionDb(), hz);
+    /** Writes one result, after the header if it is the first; values in the order of the columns. */
+    void write(double hz, double[] values) throws CommandFailure {
+        for (int i = 0; i < values.length; i++) {
+            finite(words(columns[i]), values[i], hz);
+        }
+        StringBuilder b = new StringBuilder();
         try {
             if (jsonLines) {
                 header();
-                writer.write(String.format(Locale.ROOT, "{\"frequency_hz\": %s, \"se_db\": %.6f, "
-                        + "\"absorption_db\": %.6f, \"reflection_db\": %.6f, \"multiple_reflection_db\": %.6f}\n",
-                        shortest(hz), se, a, re, b));
+                writer.write(object(b, hz, values).append('\n').toString());
             } else if (json) {
-                writer.write(count > 0 ? ",\n" : "{\n  \"design\": " + jsonString(title) + ",\n  \"field\": "
-                        + jsonString(field) + ",\n  \"results\": [\n");
-                writer.write(String.format(Locale.ROOT, "    {\"frequency_hz\": %s, \"se_db\": %.6f, "
-                        + "\"absorption_db\": %.6f, \"reflection_db\": %.6f, \"multiple_reflection_db\": %.6f}",
-                        shortest(hz), se, a, re, b));
+                writer.write(count > 0 ? ",\n" : "{\n  \"design\": " + jsonString(title) + ",\n  \"kind\": "
+                        + jsonString(kind) + ",\n  \"field\": " + jsonString(field) + ",\n  \"results\": [\n");
+                writer.write(object(b.append("    "), hz, values).toString());
             } else {
                 header();
-                writer.write(String.format(Locale.ROOT, "%s,%.6f,%.6f,%.6f,%.6f\n", shortest(hz), se, a, re, b));
+                b.append(shortest(hz));
+                for (double v : values) {
+                    b.append(',').append(String.format(Locale.ROOT, "%.6f", v));
+                }
+                writer.write(b.append('\n').toString());
             }
         } catch (IOException e) {
             throw failed(e);
         }
         count++;
+    }
+
+    private StringBuilder object(StringBuilder b, double hz, double[] values) {
+        b.append("{\"frequency_hz\": ").append(shortest(hz));
+        for (int i = 0; i < values.length; i++) {
+            b.append(", \"").append(columns[i]).append("\": ").append(String.format(Locale.ROOT, "%.6f", values[i]));
+        }
+        return b.append('}');
+    }
+
+    /** A column name in words for messages: "se_db" is the shielding effectiveness. */
+    private static String words(String column) {
+        return switch (column) {
+            case "se_db" -> "shielding effectiveness";
+            case "absorption_db" -> "absorption";
+            case "reflection_db" -> "reflection";
+            case "multiple_reflection_db" -> "multiple-reflection correction";
+            default -> column.replace("_db", "").replace('_', ' ');
+        };
     }
 
     /**
@@ -133,9 +157,10 @@ final class ResultOutput {
             return;
         }
         if (jsonLines) {
-            writer.write("{\"design\": " + jsonString(title) + ", \"field\": " + jsonString(field) + "}\n");
+            writer.write("{\"design\": " + jsonString(title) + ", \"kind\": " + jsonString(kind) + ", \"field\": "
+                    + jsonString(field) + "}\n");
         } else if (!json) {
-            writer.write(CSV_HEADER);
+            writer.write("frequency_hz," + String.join(",", columns));
             writer.write('\n');
         }
     }

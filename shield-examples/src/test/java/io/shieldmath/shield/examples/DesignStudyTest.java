@@ -18,6 +18,8 @@ import io.shieldmath.shield.design.Requirement;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.quantity.Length;
+import io.shieldmath.shield.cli.BatchCommand;
+import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.PrintStream;
@@ -108,6 +110,26 @@ class DesignStudyTest {
         assertEquals(outcome.requirement(), a.requirement(), "the file must hold every source case");
         // The library on the file gives the study's number, bit for bit (equal inputs, equal results).
         assertEquals(outcome.worstSeDb(), d.model().shieldingEffectivenessDb(outcome.worstFrequency().toHertz()), 0);
+    }
+
+    @Test
+    void theBatchCommandOnTheWrittenFileGivesTheNumberTheStudyPrinted() {
+        double hz = outcome.worstFrequency().toHertz();
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        int code = BatchCommand.run(new String[] {"--design", outcome.designFile().toString(), "--stdin"},
+                new ByteArrayInputStream((hz + "\n").getBytes(StandardCharsets.UTF_8)), out,
+                new PrintStream(err, true, StandardCharsets.UTF_8));
+        String csv = out.toString(StandardCharsets.UTF_8);
+        assertEquals(BatchCommand.OK, code, () -> csv + err.toString(StandardCharsets.UTF_8));
+        List<String> lines = csv.lines().filter(l -> !l.isBlank()).toList();
+        List<String> header = List.of(lines.get(0).split(","));
+        String[] row = lines.get(1).split(",");
+        assertEquals(hz, Double.parseDouble(row[0]), 0);
+        double batch = Double.parseDouble(row[header.indexOf("se_db")]);
+        // The batch writes six decimals: the study's number to that rounding, and the report's two decimals.
+        assertEquals(outcome.worstSeDb(), batch, 5e-7, csv);
+        assertTrue(report.contains(String.format(Locale.ROOT, "SE %.2f ± ", batch)), report);
     }
 
     @Test

@@ -82,13 +82,13 @@ public final class AxisymmetricDesign {
                                AmplitudeMeasure driveMeasure, DesignSensor sensor, MagneticFluxDensity applied,
                                Decibels tolerance, double fineness, FrequencyBand band, int points,
                                Requirement requirement,
-                               Spelling spelling, Arrangement arrangement) {
+                               Spelling spelling, Arrangement arrangement, CoilPair coils, ShieldingModel<?> model) {
         this.title = title;
         this.bodies = bodies;
         this.transmitter = transmitter;
         this.receiver = receiver;
         this.separation = separation;
-        this.coils = transmitter == null ? null
+        this.coils = coils != null || transmitter == null ? coils
                 : CoilPair.coaxial(transmitter.coil(), receiver.coil(), separation);
         this.drive = drive;
         this.driveMeasure = driveMeasure;
@@ -101,7 +101,8 @@ public final class AxisymmetricDesign {
         this.requirement = requirement;
         this.spelling = spelling;
         this.arrangement = arrangement;
-        this.model = buildModel();
+        // A copy that changes only what the solver does not see keeps the model already built.
+        this.model = model != null ? model : buildModel();
     }
 
     private ShieldingModel<?> buildModel() {
@@ -155,7 +156,7 @@ public final class AxisymmetricDesign {
         return checked(new AxisymmetricDesign("", b, Require.nonNull("transmitter", transmitter),
                 Require.nonNull("receiver", receiver), Require.nonNull("separation", separation), null, null, null,
                 null, null, DEFAULT_FINENESS,
-                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b)));
+                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
     /**
@@ -175,13 +176,13 @@ public final class AxisymmetricDesign {
         List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
         return checked(new AxisymmetricDesign("", b, null, null, null, null, null, Require.nonNull("sensor", sensor),
                 null, null, DEFAULT_FINENESS,
-                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b)));
+                Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
     private AxisymmetricDesign copy(String t, CurrentAmplitude dr, AmplitudeMeasure dm, MagneticFluxDensity ap,
                                     Decibels tol, Requirement req, Spelling sp) {
-        return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, ap, tol, fineness, band,
-                points, req, sp, arrangement);
+        return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, ap, tol, fineness,
+                band, points, req, sp, arrangement, coils, Objects.equals(tol, tolerance) ? model : null);
     }
 
     /**
@@ -233,7 +234,8 @@ public final class AxisymmetricDesign {
     public AxisymmetricDesign withFineness(double q) {
         Require.inRange("mesh fineness", q, 0.25, 16, "(plain number)");
         return new AxisymmetricDesign(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor,
-                applied, tolerance, q, band, points, requirement, spelling, arrangement);
+                applied, tolerance, q, band, points, requirement, spelling, arrangement, coils,
+                q == fineness ? model : null);
     }
 
     /**

@@ -521,6 +521,7 @@ public final class WholeDesignFile {
         root.put("band", sp.text(d.band()));
         root.put("points", d.points());
         writeCases(root, d.requirement(), sp);
+        sp.applyTo(root);
         return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
     }
 

@@ -435,6 +435,7 @@ public final class DesignFile {
             writeLayers(root.putArray("layers"), d.layers(), sp);
         }
         writeFieldBandCases(root, d, sp);
+        sp.applyTo(root);
         return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
     }
 

@@ -49,6 +49,11 @@ import io.shieldmath.shield.design.Requirement;
 import io.shieldmath.shield.materials.files.MaterialFileException;
 import io.shieldmath.shield.quantity.CurrentAmplitude;
 import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.quantity.ConductivityUnit;
+import io.shieldmath.shield.quantity.CurrentUnit;
+import io.shieldmath.shield.quantity.FluxDensityUnit;
+import io.shieldmath.shield.quantity.FrequencyUnit;
+import io.shieldmath.shield.quantity.LengthUnit;
 
 /**
  * What the catalogue and design formats share: the header check, located builder steps,
@@ -248,51 +253,49 @@ public final class JsonValues {
 
     // ================================================================ exact text of quantities
 
-    private static <Q> String exact(Q q, Function<String, Q> parse, double si, String siUnit, String... units) {
-        String pretty = q.toString();
-        String best = null;
-        if (readsBack(pretty, q, parse)) {
-            best = pretty;
-        }
+    private static <Q> String exact(Q q, Function<String, Q> parse, double si, String siUnit,
+                                    io.shieldmath.shield.quantity.Unit... units) {
         // The shortest text in a common unit that reads back to exactly this value: a value made
-        // from 0.2 mm is written "0.2 mm", not "0.0002 m" (0.2·1e-3 is not the double nearest 2e-4).
-        for (String unit : units) {
-            double factor;
-            try {
-                factor = SI.applyAsDouble(parse.apply("1 " + unit));
-            } catch (IllegalArgumentException e) {
-                continue;
-            }
-            java.math.BigDecimal v = new java.math.BigDecimal(si / factor);
-            for (int digits = 1; digits <= 17; digits++) {
-                String t = v.round(new java.math.MathContext(digits)).stripTrailingZeros().toPlainString() + " " + unit;
-                if (best != null && t.length() >= best.length()) {
-                    break;
-                }
-                if (readsBack(t, q, parse)) {
-                    best = t;
-                    break;
-                }
+        // from 0.2 mm is written "0.2 mm", not "0.0002 m" or "200 µm" (0.2·1e-3 is neither the
+        // double nearest 2e-4 nor 200·1e-6). Candidates are found with plain double arithmetic,
+        // as the quantity parser computes them (number × unit factor), and the one chosen is
+        // then checked with the parser itself.
+        String best = null;
+        for (io.shieldmath.shield.quantity.Unit unit : units) {
+            String number = shortestIn(si, unit.toSi(),
+                    best == null ? 40 : best.length() - unit.symbol().length() - 2);
+            if (number != null) {
+                best = number + " " + unit.symbol();
             }
         }
-        return best != null ? best : Text.exact(si) + " " + siUnit;
+        if (best != null && readsBack(best, q, parse)) {
+            return best;
+        }
+        String pretty = q.toString();
+        if (readsBack(pretty, q, parse)) {
+            return pretty;
+        }
+        return Text.exact(si) + " " + siUnit;
     }
 
-    /** The SI value of a quantity of a type with several common units. */
-    private static final java.util.function.ToDoubleFunction<Object> SI = o -> {
-        if (o instanceof Length v) {
-            return v.toMetres();
-        } else if (o instanceof Frequency v) {
-            return v.toHertz();
-        } else if (o instanceof Conductivity v) {
-            return v.toSiemensPerMetre();
-        } else if (o instanceof MagneticFluxDensity v) {
-            return v.toTesla();
-        } else if (o instanceof CurrentAmplitude v) {
-            return v.toAmperes();
+    /**
+     * A short plain decimal, at most {@code maxChars} characters, whose product with the
+     * factor is exactly si, or null: the quotient rounded to 15 digits (0.2 when 0.2·1e-3/1e-3
+     * comes out as 0.20000000000000004), else the quotient's own shortest text.
+     */
+    private static String shortestIn(double si, double factor, int maxChars) {
+        double quotient = si / factor;
+        if (maxChars <= 0 || !(quotient > 0) || Double.isInfinite(quotient)) {
+            return null;
         }
-        throw new IllegalArgumentException("no SI value for " + o);
-    };
+        String rounded = new java.math.BigDecimal(quotient).round(new java.math.MathContext(15))
+                .stripTrailingZeros().toPlainString();
+        if (rounded.length() <= maxChars && Double.parseDouble(rounded) * factor == si) {
+            return rounded;
+        }
+        String own = java.math.BigDecimal.valueOf(quotient).stripTrailingZeros().toPlainString();
+        return own.length() <= maxChars && Double.parseDouble(own) * factor == si ? own : null;
+    }
 
     private static <Q> boolean readsBack(String text, Q q, Function<String, Q> parse) {
         try {
@@ -310,7 +313,8 @@ public final class JsonValues {
      * @return the text
      */
     public static String text(Conductivity c) {
-        return exact(c, Conductivity::parse, c.toSiemensPerMetre(), "S/m", "MS/m", "S/m");
+        return exact(c, Conductivity::parse, c.toSiemensPerMetre(), "S/m", ConductivityUnit.MEGASIEMENS_PER_METRE,
+                ConductivityUnit.SIEMENS_PER_METRE);
     }
 
     /**
@@ -321,7 +325,8 @@ public final class JsonValues {
      * @return the text
      */
     public static String text(Length l) {
-        return exact(l, Length::parse, l.toMetres(), "m", "mm", "µm", "m", "cm", "nm");
+        return exact(l, Length::parse, l.toMetres(), "m", LengthUnit.MILLIMETRE, LengthUnit.MICROMETRE,
+                LengthUnit.METRE, LengthUnit.CENTIMETRE, LengthUnit.NANOMETRE);
     }
 
     /**
@@ -332,7 +337,8 @@ public final class JsonValues {
      * @return the text
      */
     public static String text(Frequency f) {
-        return exact(f, Frequency::parse, f.toHertz(), "Hz", "Hz", "kHz", "MHz", "GHz");
+        return exact(f, Frequency::parse, f.toHertz(), "Hz", FrequencyUnit.HERTZ, FrequencyUnit.KILOHERTZ,
+                FrequencyUnit.MEGAHERTZ, FrequencyUnit.GIGAHERTZ);
     }
 
     /**
@@ -354,7 +360,8 @@ public final class JsonValues {
      * @return the text
      */
     public static String text(MagneticFluxDensity b) {
-        return exact(b, MagneticFluxDensity::parse, b.toTesla(), "T", "µT", "nT", "mT", "T");
+        return exact(b, MagneticFluxDensity::parse, b.toTesla(), "T", FluxDensityUnit.MICROTESLA,
+                FluxDensityUnit.NANOTESLA, FluxDensityUnit.MILLITESLA, FluxDensityUnit.TESLA);
     }
 
     /**
@@ -418,7 +425,7 @@ public final class JsonValues {
      * @return the text
      */
     public static String text(CurrentAmplitude c) {
-        return exact(c, CurrentAmplitude::parse, c.toAmperes(), "A", "mA", "A", "µA");
+        return exact(c, CurrentAmplitude::parse, c.toAmperes(), "A", CurrentUnit.MILLIAMPERE, CurrentUnit.AMPERE);
     }
 
     /**

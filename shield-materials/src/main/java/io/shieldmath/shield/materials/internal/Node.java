@@ -103,11 +103,14 @@ public final class Node {
     /** The items of an array, else null. */
     public final List<Node> items;
 
-    /** The document's quantities whose text differs from their default written form: default text to text. */
-    private final Map<String, String> spelled;
+    /**
+     * The document's quantities whose text differs from their default written form: from the
+     * JSON path to the default text and the text as given.
+     */
+    private final Map<String, Map.Entry<String, String>> spelled;
 
     private Node(Type type, String path, int line, int column, String text, Map<String, Node> fields,
-                 List<Node> items, Map<String, String> spelled) {
+                 List<Node> items, Map<String, Map.Entry<String, String>> spelled) {
         this.spelled = spelled;
         this.type = type;
         this.path = path;
@@ -287,7 +290,7 @@ public final class Node {
     private static final class State {
         JsonParser parser;
         String path = "$";
-        final Map<String, String> spelled = new LinkedHashMap<>();
+        final Map<String, Map.Entry<String, String>> spelled = new LinkedHashMap<>();
 
         JsonToken next() {
             return parser.nextToken();
@@ -453,7 +456,7 @@ public final class Node {
             String plain = JsonValues.defaultText(q);
             if (plain != null && !plain.equals(value)) {
                 // Reading is single-threaded; the map is only read once the whole document is read.
-                spelled.putIfAbsent(plain, value);
+                spelled.putIfAbsent(path, Map.entry(plain, value));
             }
             return q;
         } catch (IllegalArgumentException | ArithmeticException e) {
@@ -481,12 +484,13 @@ public final class Node {
 
     /**
      * The quantities of this value's document read so far whose text differs from the form
-     * {@link JsonValues#defaultText(Object)} would write: from that default text to the text
-     * as given, so that a design read from a file is written back in the user's units.
+     * {@link JsonValues#defaultText(Object)} would write: from the JSON path to that default
+     * text and the text as given, so that a design read from a file is written back in the
+     * user's units.
      *
      * @return an unmodifiable copy
      */
-    public Map<String, String> spelled() {
+    public Map<String, Map.Entry<String, String>> spelled() {
         return Map.copyOf(spelled);
     }
 

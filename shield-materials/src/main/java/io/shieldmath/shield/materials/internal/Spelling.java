@@ -3,14 +3,20 @@
  */
 package io.shieldmath.shield.materials.internal;
 
+import java.util.ArrayList;
 import java.util.Map;
 import java.util.Objects;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.node.ArrayNode;
+import tools.jackson.databind.node.ObjectNode;
 
 /**
  * The texts a design's quantities were given in, where they differ from the default written
  * form ({@link JsonValues#defaultText(Object)}): "0.2 mm" stays "0.2 mm" and "21 mil" stays
- * "21 mil" when a design read from a file is written again. Keyed by the default text, which
- * is one-to-one with the value, so a text is only ever used for a value it reads back to.
+ * "21 mil" when a design read from a file is written again. Each text is kept with its JSON
+ * path and the default text of its value; it is written back only at the same path and only
+ * while the value there is still the same (its default text unchanged), so a text is never
+ * used for a value it does not read back to, and one value given in two forms keeps both.
  *
  * <p>Immutable and thread-safe; equality is by value.
  */
@@ -19,24 +25,26 @@ public final class Spelling {
     /** No texts: every quantity is written in its default form. */
     public static final Spelling DEFAULT = new Spelling(Map.of());
 
-    private final Map<String, String> given;
+    private final Map<String, Map.Entry<String, String>> given;
 
-    private Spelling(Map<String, String> given) {
+    private Spelling(Map<String, Map.Entry<String, String>> given) {
         this.given = given;
     }
 
     /**
      * The texts noted while reading a document.
      *
-     * @param given from default text to the text as given, as {@link Node#spelled()} returns it
+     * @param given from JSON path to the default text and the text as given, as
+     *              {@link Node#spelled()} returns it
      * @return the spelling
      */
-    public static Spelling of(Map<String, String> given) {
+    public static Spelling of(Map<String, Map.Entry<String, String>> given) {
         return given.isEmpty() ? DEFAULT : new Spelling(Map.copyOf(given));
     }
 
     /**
-     * The text to write a quantity in: as it was given, else its default form.
+     * The default written form of a quantity; {@link #applyTo(ObjectNode)} puts the texts as
+     * given back once the whole document is written.
      *
      * @param quantity a quantity of a type {@link JsonValues#defaultText(Object)} knows, not null
      * @return the text
@@ -47,7 +55,63 @@ public final class Spelling {
         if (plain == null) {
             throw new IllegalArgumentException("files do not hold a " + quantity.getClass().getSimpleName());
         }
-        return given.getOrDefault(plain, plain);
+        return plain;
+    }
+
+    /**
+     * Puts the texts as given back into a written document: each text value at a noted path
+     * that still holds the noted default text (or that text after a minus sign) is replaced
+     * by the text as given.
+     *
+     * @param root the document's root object, changed in place
+     */
+    public void applyTo(ObjectNode root) {
+        if (!given.isEmpty()) {
+            walk(root, "$");
+        }
+    }
+
+    private void walk(JsonNode node, String path) {
+        if (node instanceof ObjectNode o) {
+            for (Map.Entry<String, JsonNode> e : new ArrayList<>(o.properties())) {
+                String child = path + "." + e.getKey();
+                if (e.getValue().isString()) {
+                    String replaced = replacement(child, e.getValue().asString());
+                    if (replaced != null) {
+                        o.put(e.getKey(), replaced);
+                    }
+                } else {
+                    walk(e.getValue(), child);
+                }
+            }
+        } else if (node instanceof ArrayNode a) {
+            for (int i = 0; i < a.size(); i++) {
+                String child = path + "[" + i + "]";
+                JsonNode item = a.get(i);
+                if (item.isString()) {
+                    String replaced = replacement(child, item.asString());
+                    if (replaced != null) {
+                        a.set(i, replaced);
+                    }
+                } else {
+                    walk(item, child);
+                }
+            }
+        }
+    }
+
+    private String replacement(String path, String written) {
+        Map.Entry<String, String> e = given.get(path);
+        if (e == null) {
+            return null;
+        }
+        if (written.equals(e.getKey())) {
+            return e.getValue();
+        }
+        if (written.equals("-" + e.getKey())) {
+            return "-" + e.getValue();
+        }
+        return null;
     }
 
     /**
