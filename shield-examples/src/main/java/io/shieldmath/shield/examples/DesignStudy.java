@@ -271,7 +271,7 @@ public final class DesignStudy {
         chart.writeSvg(folder.resolve("se-vs-frequency.svg"), CHART_WIDTH, CHART_HEIGHT);
         List<String> maps = writeFieldMaps(folder, copper, best, need);
         out.println();
-        out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, chosen-design.json, "
+        out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, " + (best == null ? "" : "chosen-design.json, ")
                 + "se-vs-frequency.png, se-vs-frequency.svg" + (maps.isEmpty() ? "" : ", " + String.join(", ", maps)));
         if (best == null) {
             return new Outcome(null, null, need, folder, null, null, Double.NaN);
