@@ -47,11 +47,19 @@ final class Colours {
         new Color(0x00406b), new Color(0x009093), new Color(0x8d293d), new Color(0xd87b44),
         new Color(0x6750a2), new Color(0x62afd6), new Color(0x886c2a), new Color(0xdcb438)};
 
+    /** The canvas colour of our pictures, a warm off-white. */
+    static final Color PAPER = new Color(0xF7F5F0);
+    /** The colour of words and axes. */
+    static final Color INK = new Color(0x23262B);
+    /** The colour of secondary words, ticks and leaders. */
+    static final Color QUIET_INK = new Color(0x5C6168);
+
     /** Steps of the field colour map's table. */
     static final int FIELD_STEPS = 256;
 
-    /** L* of the weakest and strongest field colour. */
+    /** L* of the weakest field colour. */
     static final double FIELD_LIGHTNESS_LOW = 16;
+    /** L* of the strongest field colour. */
     static final double FIELD_LIGHTNESS_HIGH = 96;
 
     /** Control points of the field map: position, CIELAB chroma, hue in degrees (unwrapped). */
@@ -108,7 +116,14 @@ final class Colours {
         return labOfLinear(linear((rgb >> 16) & 0xff), linear((rgb >> 8) & 0xff), linear(rgb & 0xff));
     }
 
-    /** CIELAB of linear sRGB components (0 to 1). */
+    /**
+     * CIELAB coordinates (D65) of linear sRGB components.
+     *
+     * @param r linear red, 0 to 1
+     * @param g linear green, 0 to 1
+     * @param b linear blue, 0 to 1
+     * @return {L*, a*, b*}
+     */
     static double[] labOfLinear(double r, double g, double b) {
         double x = (0.4124 * r + 0.3576 * g + 0.1805 * b) / 0.95047;
         double y = 0.2126 * r + 0.7152 * g + 0.0722 * b;
@@ -117,7 +132,12 @@ final class Colours {
         return new double[] {116 * fy - 16, 500 * (labF(x) - fy), 200 * (fy - labF(z))};
     }
 
-    /** The linear value (0 to 1) of an 8-bit sRGB component (IEC 61966-2-1). */
+    /**
+     * The linear value of an 8-bit sRGB component (IEC 61966-2-1).
+     *
+     * @param component 0 to 255
+     * @return 0 to 1
+     */
     static double linear(int component) {
         double c = component / 255.0;
         return c <= 0.04045 ? c / 12.92 : Math.pow((c + 0.055) / 1.055, 2.4);

@@ -30,9 +30,12 @@ import java.util.List;
  */
 public final class FieldMapExample {
 
-    /** The picture size in pixels. */
+    /** The pictures' width in pixels. */
     static final int WIDTH = 900;
-    static final int HEIGHT = 760;
+    /** The bench picture's height in pixels (a wide, flat scene). */
+    static final int BENCH_HEIGHT = 520;
+    /** The can picture's height in pixels. */
+    static final int CAN_HEIGHT = 760;
 
     /** The applied field of the can case (illustrative). */
     static final MagneticFluxDensity APPLIED = uT(50);
@@ -66,24 +69,36 @@ public final class FieldMapExample {
         FieldMapPicture can = canCase();
         Path[] files = {folder.resolve("field-map-bench.png"), folder.resolve("field-map-bench.svg"),
             folder.resolve("field-map-can.png"), folder.resolve("field-map-can.svg")};
-        bench.writePng(files[0], WIDTH, HEIGHT);
-        bench.writeSvg(files[1], WIDTH, HEIGHT);
-        can.writePng(files[2], WIDTH, HEIGHT);
-        can.writeSvg(files[3], WIDTH, HEIGHT);
+        bench.writePng(files[0], WIDTH, BENCH_HEIGHT);
+        bench.writeSvg(files[1], WIDTH, BENCH_HEIGHT);
+        can.writePng(files[2], WIDTH, CAN_HEIGHT);
+        can.writeSvg(files[3], WIDTH, CAN_HEIGHT);
         return List.of(files);
     }
 
-    /** The bench arrangement: a copper disc of 40 mm radius, 1 mm thick, midway between the coils. */
+    /**
+     * The bench arrangement: a copper disc of 40 mm radius, 1 mm thick, midway between the coils.
+     *
+     * @return the arrangement
+     */
     static Arrangement benchArrangement() {
         return Arrangement.of(Body.disc("copper plate", Catalogue.builtIn().get("copper-annealed"), mm(40), mm(1)));
     }
 
-    /** Two 15 mm coils of 20 turns, 30 mm apart (illustrative). */
+    /**
+     * Two 15 mm coils of 20 turns, 30 mm apart (illustrative).
+     *
+     * @return the coils
+     */
     static CoilPair benchCoils() {
         return CoilPair.coaxial(Coil.loop(mm(15), 20), Coil.loop(mm(15), 20), mm(30));
     }
 
-    /** The can: 80 % nickel–iron, 20 mm inner radius, 1 mm wall, 60 mm long, a 4 mm cable hole on top. */
+    /**
+     * The can: 80 % nickel–iron, 20 mm inner radius, 1 mm wall, 60 mm long, a 4 mm cable hole on top.
+     *
+     * @return the arrangement
+     */
     static Arrangement canArrangement() {
         return Arrangement.of(Body.can("Ni-Fe can", Catalogue.builtIn().get("nickel-iron-80"), mm(20), mm(1), mm(60))
                 .withCapHole(CanEnd.UPPER, mm(4)));

@@ -33,8 +33,10 @@ import java.util.Locale;
 /**
  * A picture of a field map of an axisymmetric arrangement: the peak flux density |B| on a
  * logarithmic colour scale with its colour bar and unit, the flux lines, and the outline of
- * every body (and of the coils, when given), in the (r, z) half-plane at true aspect ratio,
- * with the axis (r = 0) at the left edge. Written as PNG or SVG (SVG text stays text).
+ * every body (and of the coils, when given), in the (r, z) half-plane
+ * at true aspect ratio. A map that starts on the axis is drawn as a section through the axis:
+ * its mirror image on the left, the axis as a dash-dot centre line. Written as PNG or SVG
+ * (SVG text stays text).
  *
  * <pre>{@code
  * AxialFieldSolution s = can.inUniformAxialField().magnetostatic();
@@ -72,9 +74,9 @@ public final class FieldMapPicture {
     /** The most decades the colour scale spans. */
     static final double MAX_DECADES = 5;
 
-    private static final Color PAPER = new Color(0xF7F5F0);
-    private static final Color INK = new Color(0x23262B);
-    private static final Color QUIET_INK = new Color(0x5C6168);
+    private static final Color PAPER = Colours.PAPER;
+    private static final Color INK = Colours.INK;
+    private static final Color QUIET_INK = Colours.QUIET_INK;
     private static final Color HALO = new Color(255, 255, 255, 170);
     private static final String FONT = Font.SANS_SERIF;
 
@@ -272,12 +274,28 @@ public final class FieldMapPicture {
 
     // ---------------------------------------------------------------- layout
 
-    /** Where the map sits on a canvas: pixel x of r, pixel y of z. Package-private for the tests. */
-    record Frame(double x0, double y0, double pxPerMetre, double rMin, double zMax, int width, int height) {
+    /**
+     * Where the map sits on a canvas: pixel x of r (r &lt; 0 is the mirrored half, left of the
+     * axis), pixel y of z. Package-private for the tests.
+     */
+    record Frame(double x0, double y0, double pxPerMetre, double rLeft, double zMax, int width, int height,
+                 boolean mirrored) {
+        /**
+         * The pixel column of a radius.
+         *
+         * @param rMetres r in m; negative on the mirrored half
+         * @return x in pixels
+         */
         double x(double rMetres) {
-            return x0 + (rMetres - rMin) * pxPerMetre;
+            return x0 + (rMetres - rLeft) * pxPerMetre;
         }
 
+        /**
+         * The pixel row of an axial coordinate.
+         *
+         * @param zMetres z in m
+         * @return y in pixels
+         */
         double y(double zMetres) {
             return y0 + (zMax - zMetres) * pxPerMetre;
         }
@@ -288,13 +306,21 @@ public final class FieldMapPicture {
     private static final int BOTTOM = 62;
     private static final int RIGHT = 120;
 
-    /** The map's place on a canvas of the given size. */
+    /**
+     * The map's place on a canvas of the given size.
+     *
+     * @param width  the canvas width in pixels
+     * @param height the canvas height in pixels
+     * @return the frame
+     */
     Frame frame(int width, int height) {
-        double spanR = r[r.length - 1] - r[0];
+        boolean mirrored = r[0] == 0;
+        double rLeft = mirrored ? -r[r.length - 1] : r[0];
+        double spanR = r[r.length - 1] - rLeft;
         double spanZ = z[z.length - 1] - z[0];
         double s = Math.min(Math.max(20, width - LEFT - RIGHT) / spanR, Math.max(20, height - TOP - BOTTOM) / spanZ);
-        return new Frame(LEFT, TOP, s, r[0], z[z.length - 1], (int) Math.round(spanR * s),
-                (int) Math.round(spanZ * s));
+        return new Frame(LEFT, TOP, s, rLeft, z[z.length - 1], (int) Math.round(spanR * s),
+                (int) Math.round(spanZ * s), mirrored);
     }
 
     // ---------------------------------------------------------------- painting
@@ -309,12 +335,20 @@ public final class FieldMapPicture {
         if (coils != null) {
             paintCoils(g, f);
         }
+        if (f.mirrored()) {
+            g.setColor(INK);
+            g.setStroke(new BasicStroke(1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                    new float[] {12f, 3f, 2f, 3f}, 0f));
+            g.draw(new Line2D.Double(f.x(0), f.y0(), f.x(0), f.y0() + f.height()));
+            g.setFont(new Font(FONT, Font.PLAIN, 11));
+            haloText(g, "axis", (float) f.x(0) + 4, (float) f.y0() + 14);
+        }
         g.setColor(QUIET_INK);
         g.setStroke(new BasicStroke(1f));
         g.draw(new Rectangle2D.Double(f.x0(), f.y0(), f.width(), f.height()));
         paintAxes(g, f);
         paintColourBar(g, f);
-        paintTitle(g, f, width);
+        paintTitle(g);
     }
 
     /** The colour field at one image pixel per canvas pixel, bilinear in log10 |B|. */
@@ -328,7 +362,7 @@ public final class FieldMapPicture {
         int[] column = new int[w];
         double[] columnU = new double[w];
         for (int px = 0; px < w; px++) {
-            double rr = f.rMin() + (px + 0.5) / f.pxPerMetre();
+            double rr = Math.abs(f.rLeft() + (px + 0.5) / f.pxPerMetre());   // mirrored: |r|
             column[px] = cell(r, rr);
             columnU[px] = fraction(r, column[px], rr);
         }
@@ -386,8 +420,7 @@ public final class FieldMapPicture {
         for (int j = 1; j <= fluxLines; j++) {
             double level = lo + (hi - lo) * (j - 0.5) / fluxLines;
             ContourTracer.trace(r, z, psi, level, (r0, z0, r1, z1) -> {
-                path.moveTo(f.x(r0), f.y(z0));
-                path.lineTo(f.x(r1), f.y(z1));
+                segment(path, f, r0, z0, r1, z1);
             }, seg);
         }
         g.setColor(HALO);
@@ -402,8 +435,7 @@ public final class FieldMapPicture {
         Path2D.Double outline = new Path2D.Double();
         for (Body body : arrangement.bodies()) {
             for (double[] e : Outline.edges(body.crossSectionMetres())) {
-                outline.moveTo(f.x(e[0]), f.y(e[1]));
-                outline.lineTo(f.x(e[2]), f.y(e[3]));
+                segment(outline, f, e[0], e[1], e[2], e[3]);
             }
         }
         g.setColor(Color.WHITE);
@@ -414,19 +446,31 @@ public final class FieldMapPicture {
         g.draw(outline);
     }
 
-    private void paintCoils(Graphics2D g, Frame f) {
-        double d = coils.separation().toMetres();
-        paintCoil(g, f, coils.transmitter(), -d / 2, "transmitter");
-        paintCoil(g, f, coils.receiver(), d / 2, "receiver");
+    /** A straight piece from (r0, z0) to (r1, z1), and its mirror image when the frame is mirrored. */
+    private static void segment(Path2D.Double path, Frame f, double r0, double z0, double r1, double z1) {
+        path.moveTo(f.x(r0), f.y(z0));
+        path.lineTo(f.x(r1), f.y(z1));
+        if (f.mirrored()) {
+            path.moveTo(f.x(-r0), f.y(z0));
+            path.lineTo(f.x(-r1), f.y(z1));
+        }
     }
 
-    private static void paintCoil(Graphics2D g, Frame f, Coil coil, double zc, String label) {
+    private void paintCoils(Graphics2D g, Frame f) {
+        double d = coils.separation().toMetres();
+        for (double side : f.mirrored() ? new double[] {1, -1} : new double[] {1}) {
+            paintCoil(g, f, coils.transmitter(), side, -d / 2, side > 0 ? "transmitter" : null);
+            paintCoil(g, f, coils.receiver(), side, d / 2, side > 0 ? "receiver" : null);
+        }
+    }
+
+    private static void paintCoil(Graphics2D g, Frame f, Coil coil, double side, double zc, String label) {
         double a = coil.radius().toMetres();
         double w = coil.radialWidth().map(l -> l.toMetres()).orElse(0.0);
         double l = coil.axialLength().map(x -> x.toMetres()).orElse(0.0);
         double halfW = Math.max(4, w * f.pxPerMetre() / 2);
         double halfL = Math.max(4, l * f.pxPerMetre() / 2);
-        double x = f.x(a);
+        double x = f.x(side * a);
         double y = f.y(zc);
         Rectangle2D box = new Rectangle2D.Double(x - halfW, y - halfL, 2 * halfW, 2 * halfL);
         g.setColor(new Color(0xF2C14E));
@@ -436,8 +480,10 @@ public final class FieldMapPicture {
         g.draw(box);
         g.draw(new Line2D.Double(box.getMinX(), box.getMinY(), box.getMaxX(), box.getMaxY()));
         g.draw(new Line2D.Double(box.getMinX(), box.getMaxY(), box.getMaxX(), box.getMinY()));
-        g.setFont(new Font(FONT, Font.PLAIN, 11));
-        haloText(g, label + " coil", (float) (box.getMaxX() + 4), (float) (y + 4));
+        if (label != null) {
+            g.setFont(new Font(FONT, Font.PLAIN, 11));
+            haloText(g, label + " coil", (float) (box.getMaxX() + 4), (float) (y + 4));
+        }
     }
 
     private static void haloText(Graphics2D g, String s, float x, float y) {
@@ -453,12 +499,13 @@ public final class FieldMapPicture {
         FontMetrics m = g.getFontMetrics();
         g.setStroke(new BasicStroke(1f));
         double bottom = f.y0() + f.height();
-        double stepR = niceStep((r[r.length - 1] - r[0]) * 1e3);
-        for (double mm = Math.ceil(r[0] * 1e3 / stepR) * stepR; mm <= r[r.length - 1] * 1e3 + 1e-9; mm += stepR) {
+        double stepR = niceStep((r[r.length - 1] - f.rLeft()) * 1e3);
+        for (double mm = Math.ceil(f.rLeft() * 1e3 / stepR) * stepR; mm <= r[r.length - 1] * 1e3 + 1e-9;
+                mm += stepR) {
             double x = f.x(mm / 1e3);
             g.setColor(QUIET_INK);
             g.draw(new Line2D.Double(x, bottom, x, bottom + 5));
-            String s = number(mm);
+            String s = number(Math.abs(mm));
             g.setColor(INK);
             g.drawString(s, (float) (x - m.stringWidth(s) / 2.0), (float) (bottom + 7 + m.getAscent()));
         }
@@ -473,7 +520,8 @@ public final class FieldMapPicture {
         }
         g.setFont(new Font(FONT, Font.PLAIN, 12));
         m = g.getFontMetrics();
-        String rLabel = "r, distance from the axis (mm)";
+        String rLabel = f.mirrored() ? "r, distance from the axis (mm), on both sides of it"
+                : "r, distance from the axis (mm)";
         g.drawString(rLabel, (float) (f.x0() + f.width() / 2.0 - m.stringWidth(rLabel) / 2.0),
                 (float) (bottom + 26 + m.getAscent()));
         String zLabel = "z (mm)";
@@ -524,13 +572,13 @@ public final class FieldMapPicture {
         g.drawString("peak, log scale", (float) x - 4, (float) y - 8);
     }
 
-    private void paintTitle(Graphics2D g, Frame f, int width) {
+    private void paintTitle(Graphics2D g) {
         g.setColor(INK);
         g.setFont(new Font(FONT, Font.BOLD, 15));
         g.drawString(title, LEFT, 22);
         g.setFont(new Font(FONT, Font.PLAIN, 11));
         g.setColor(QUIET_INK);
-        g.drawString("colour: |B| on a log scale;  thin lines: flux lines, equal flux between neighbours"
+        g.drawString("colour: |B| on a log scale;  thin lines: flux lines (contours of Re ψ), equal flux between neighbours"
                 + (fluxLines > 0 ? "" : " (none drawn)") + ";  thick lines: bodies", LEFT, 40);
     }
 
@@ -548,7 +596,12 @@ public final class FieldMapPicture {
         return (m < 1.5 ? 1 : m < 3.5 ? 2 : m < 7.5 ? 5 : 10) * p;
     }
 
-    /** The unit (in T) in which {@code tesla} reads from 1 to below 1000: T, mT, µT or nT. */
+    /**
+     * The unit in which a flux density reads from 1 to below 1000: T, mT, µT or nT.
+     *
+     * @param tesla the flux density in T
+     * @return the unit's size in T
+     */
     static double unitOf(double tesla) {
         if (tesla >= 1) {
             return 1;
@@ -559,6 +612,12 @@ public final class FieldMapPicture {
         return tesla >= 1e-6 ? 1e-6 : 1e-9;
     }
 
+    /**
+     * The symbol of a unit chosen by {@link #unitOf(double)}.
+     *
+     * @param unit the unit's size in T
+     * @return its symbol
+     */
     static String unitName(double unit) {
         return unit == 1 ? "T" : unit == 1e-3 ? "mT" : unit == 1e-6 ? "µT" : "nT";
     }

@@ -112,6 +112,12 @@ public final class SeChart {
             return label;
         }
 
+        /**
+         * The line of this kind.
+         *
+         * @param width the line width in pixels
+         * @return a solid or dashed stroke
+         */
         Stroke stroke(float width) {
             return dashes == null ? new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND)
                     : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dashes, 0f);
@@ -121,9 +127,9 @@ public final class SeChart {
     /** The most curves a chart takes. */
     public static final int MAX_CURVES = 64;
 
-    static final Color PAPER = new Color(0xF7F5F0);
-    static final Color INK = new Color(0x23262B);
-    static final Color QUIET_INK = new Color(0x5C6168);
+    private static final Color PAPER = Colours.PAPER;
+    private static final Color INK = Colours.INK;
+    private static final Color QUIET_INK = Colours.QUIET_INK;
     private static final Color GRID = new Color(0xD5D3CE);
     private static final Color MINOR_GRID = new Color(0xECEAE5);
     private static final Color BELOW_SWITCH = new Color(0xF1EEE6);
@@ -301,14 +307,23 @@ public final class SeChart {
         return null;
     }
 
-    /** The colour of the i-th curve. */
+    /**
+     * The colour of a curve.
+     *
+     * @param index the curve's place in the chart, from 0
+     * @return its colour from the series palette
+     */
     static Color colourOf(int index) {
         return Colours.SERIES[index % Colours.SERIES.length];
     }
 
     // ---------------------------------------------------------------- building the chart
 
-    /** The chart, laid out by JFreeChart (package-private for the tests). */
+    /**
+     * The chart, laid out by JFreeChart (package-private for the tests).
+     *
+     * @return a new chart
+     */
     JFreeChart chart() {
         if (series.isEmpty()) {
             throw new IllegalStateException("the chart '" + title + "' has no curve to draw");
