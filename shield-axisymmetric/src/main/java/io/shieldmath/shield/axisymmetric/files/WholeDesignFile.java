@@ -453,7 +453,8 @@ public final class WholeDesignFile {
     private static Length shift(Node centre) {
         String text = centre.string().strip();
         String unsigned = negative(centre) || text.startsWith("+") ? text.substring(1).strip() : text;
-        if (unsigned.matches("(0+\\.?0*|\\.0+)\\s*\\S+")) {
+        // Zero and a unit ("0 mm", "0.0 in"); a unit starts with a letter or sign, never a digit.
+        if (unsigned.matches("(0+(\\.0*)?|\\.0+)\\s*[^0-9\\s.]\\S*")) {
             return null;
         }
         return centre.convert(Length::parse, unsigned);

@@ -268,4 +268,24 @@ class WholeDesignFileTest {
         assertEquals("$.arrangement", e.path());
         assertTrue(e.getMessage().contains("WholeDesignFile"), e.getMessage());
     }
+
+    @Test
+    void theReadmesExampleReads() throws Exception {
+        // The invented example the README shows and the batch command's session uses.
+        WholeDesign d = WholeDesignFile.read(Path.of("../shield-examples/examples/sensor-can.json"), CAT);
+        assertEquals(WholeDesign.Kind.AXISYMMETRIC, d.kind());
+        assertInstanceOf(AxialFieldShielding.class, d.model());
+        // Required SE = 20·log10(incident/tolerated) = 20·log10(40 µT / 100 nT) = 20·log10(400)
+        // = 52.0412 dB (the definition of shielding effectiveness, IEEE Std 299-2006, clause 3).
+        assertEquals(52.0412, d.requirement().entries().get(0).requiredDb(), 1e-4);
+    }
+
+    @Test
+    void aCentreAtZeroIsNoShiftAndABareNumberIsRefused() {
+        WholeDesign zero = WholeDesignFile.parse(CAN.replace("\"centre\": \"2 mm\"", "\"centre\": \"0 mm\""), CAT);
+        WholeDesign none = WholeDesignFile.parse(CAN.replace(", \"centre\": \"2 mm\"", ""), CAT);
+        assertEquals(none.model(), zero.model());
+        MaterialFileException bare = refused(CAN.replace("\"-45 mm\"", "\"0.45\""));
+        assertEquals("$.arrangement.bodies[1].centre", bare.path());
+    }
 }
