@@ -117,7 +117,7 @@ class ShieldBatchIT {
         BufferedReader out = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8));
         in.write("50000\n".getBytes(StandardCharsets.UTF_8));
         in.flush();
-        assertEquals("{\"design\": \"copper plate\", \"field\": \"plane wave\"}", out.readLine());
+        assertEquals("{\"design\": \"copper plate\", \"kind\": \"planar\", \"field\": \"plane wave\"}", out.readLine());
         String answer = out.readLine();
         assertTrue(answer.startsWith("{\"frequency_hz\": 50000.0, \"se_db\": ") && answer.endsWith("}"), answer);
         in.close();
