@@ -113,7 +113,7 @@ class DesignStudyTest {
     }
 
     @Test
-    void theBatchCommandOnTheWrittenFileGivesTheNumberTheStudyPrinted() {
+    void theBatchCommandOnTheWrittenFileGivesTheNumberTheStudyPrinted() throws IOException {
         double hz = outcome.worstFrequency().toHertz();
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
@@ -130,6 +130,25 @@ class DesignStudyTest {
         // The batch writes six decimals: the study's number to that rounding, and the report's two decimals.
         assertEquals(outcome.worstSeDb(), batch, 5e-7, csv);
         assertTrue(report.contains(String.format(Locale.ROOT, "SE %.2f ± ", batch)), report);
+        // The README's quick start shows this very exchange.
+        assertTrue(readme().contains(lines.get(1)), "README does not show the batch line " + lines.get(1));
+    }
+
+    static String readme() throws IOException {
+        return Files.readString(Path.of("..", "README.md"), StandardCharsets.UTF_8);
+    }
+
+    @Test
+    void theReadmeShowsWhatTheStudyPrints() throws IOException {
+        String readme = readme();
+        int from = readme.indexOf("## Quick start");
+        String quick = readme.substring(from, readme.indexOf("\n## ", from + 1));
+        List<String> shown = quick.lines().filter(l -> l.startsWith("  can ") || l.startsWith("  plate ")
+                || l.startsWith("Recommended: ")).toList();
+        assertTrue(shown.size() >= 4, quick);
+        for (String line : shown) {
+            assertTrue(report.contains(line), "README shows a line the study no longer prints: " + line);
+        }
     }
 
     @Test
