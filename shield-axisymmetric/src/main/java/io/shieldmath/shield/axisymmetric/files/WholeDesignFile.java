@@ -6,10 +6,10 @@ package io.shieldmath.shield.axisymmetric.files;
 import static io.shieldmath.shield.materials.internal.JsonValues.MAPPER;
 import static io.shieldmath.shield.materials.internal.JsonValues.at;
 import static io.shieldmath.shield.materials.internal.JsonValues.header;
-import static io.shieldmath.shield.materials.internal.JsonValues.readCases;
-import static io.shieldmath.shield.materials.internal.JsonValues.readMedium;
-import static io.shieldmath.shield.materials.internal.JsonValues.writeCases;
-import static io.shieldmath.shield.materials.internal.JsonValues.writeMedium;
+import static io.shieldmath.shield.materials.internal.DesignParts.readCases;
+import static io.shieldmath.shield.materials.internal.DesignParts.readMedium;
+import static io.shieldmath.shield.materials.internal.DesignParts.writeCases;
+import static io.shieldmath.shield.materials.internal.DesignParts.writeMedium;
 
 import io.shieldmath.shield.axisymmetric.Arrangement;
 import io.shieldmath.shield.axisymmetric.CanEnd;

@@ -51,6 +51,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import static io.shieldmath.shield.materials.internal.JsonValues.*;
+import static io.shieldmath.shield.materials.internal.QuantityText.*;
+import static io.shieldmath.shield.materials.internal.DesignParts.*;
 
 /**
  * The catalogue file format: reading a catalogue document with strict validation and its

@@ -50,6 +50,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import static io.shieldmath.shield.materials.internal.JsonValues.*;
+import static io.shieldmath.shield.materials.internal.QuantityText.*;
+import static io.shieldmath.shield.materials.internal.DesignParts.*;
 
 /**
  * The design file format: reading a design document, resolving material identifiers

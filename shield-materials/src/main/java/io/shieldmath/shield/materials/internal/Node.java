@@ -453,7 +453,7 @@ public final class Node {
     public <Q> Q convert(Function<String, Q> parser, String value) {
         try {
             Q q = parser.apply(value);
-            String plain = JsonValues.defaultText(q);
+            String plain = QuantityText.defaultText(q);
             if (plain != null && !plain.equals(value)) {
                 // Reading is single-threaded; the map is only read once the whole document is read.
                 spelled.putIfAbsent(path, Map.entry(plain, value));
@@ -484,7 +484,7 @@ public final class Node {
 
     /**
      * The quantities of this value's document read so far whose text differs from the form
-     * {@link JsonValues#defaultText(Object)} would write: from the JSON path to that default
+     * {@link QuantityText.defaultText(Object)} would write: from the JSON path to that default
      * text and the text as given, so that a design read from a file is written back in the
      * user's units.
      *

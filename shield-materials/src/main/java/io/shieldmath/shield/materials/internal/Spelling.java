@@ -12,7 +12,7 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * The texts a design's quantities were given in, where they differ from the default written
- * form ({@link JsonValues#defaultText(Object)}): "0.2 mm" stays "0.2 mm" and "21 mil" stays
+ * form ({@link QuantityText.defaultText(Object)}): "0.2 mm" stays "0.2 mm" and "21 mil" stays
  * "21 mil" when a design read from a file is written again. Each text is kept with its JSON
  * path and the default text of its value; it is written back only at the same path and only
  * while the value there is still the same (its default text unchanged), so a text is never
@@ -46,12 +46,12 @@ public final class Spelling {
      * The default written form of a quantity; {@link #applyTo(ObjectNode)} puts the texts as
      * given back once the whole document is written.
      *
-     * @param quantity a quantity of a type {@link JsonValues#defaultText(Object)} knows, not null
+     * @param quantity a quantity of a type {@link QuantityText.defaultText(Object)} knows, not null
      * @return the text
      * @throws IllegalArgumentException if the type is not one files hold
      */
     public String text(Object quantity) {
-        String plain = JsonValues.defaultText(Objects.requireNonNull(quantity, "quantity"));
+        String plain = QuantityText.defaultText(Objects.requireNonNull(quantity, "quantity"));
         if (plain == null) {
             throw new IllegalArgumentException("files do not hold a " + quantity.getClass().getSimpleName());
         }
