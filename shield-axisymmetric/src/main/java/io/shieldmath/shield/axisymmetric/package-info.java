@@ -17,6 +17,11 @@
  * s.worstShieldingFactor();
  * }</pre>
  *
+ * <p>{@link io.shieldmath.shield.axisymmetric.BenchPrediction} answers what a round plate
+ * should read between two coils: the solver's finite-plate insertion loss with its
+ * discretisation estimate beside the infinite-sheet figure, and a verdict on bench readings
+ * against the finite plate ({@link io.shieldmath.shield.axisymmetric.BenchAgreement}).
+ *
  * <h2>Method</h2>
  * The field is quasi-static and time-harmonic (phasors e^{jωt}). The only unknown is the
  * azimuthal vector potential A = A_φ(r, z); B_r = −∂A/∂z and B_z = (1/r)·∂(rA)/∂r. Galerkin's

@@ -4,8 +4,10 @@
 package io.shieldmath.shield.bench;
 
 /**
- * What a bench measurement of insertion loss says when held against the infinite-sheet
- * model.
+ * What a bench measurement of insertion loss says when held against a model: the
+ * infinite-sheet coupling ({@link BenchComparison}), or a finite-plate prediction of the
+ * axisymmetric solver (module {@code shield-axisymmetric}, where the constants mean the same
+ * against the finite plate). The notes below are for the infinite sheet.
  */
 public enum BenchVerdict {
     /** The model value lies within the measurement's uncertainty (and the model tolerance). */

@@ -4,28 +4,38 @@
 package io.shieldmath.shield.examples;
 
 import static io.shieldmath.shield.quantity.Quantities.Hz;
-import static io.shieldmath.shield.quantity.Quantities.cm;
 import static io.shieldmath.shield.quantity.Quantities.kHz;
 import static io.shieldmath.shield.quantity.Quantities.mm;
 import static io.shieldmath.shield.quantity.Quantities.nT;
 import static io.shieldmath.shield.quantity.Quantities.uT;
 
-import io.shieldmath.shield.design.MarginReport;
+import io.shieldmath.shield.axisymmetric.Arrangement;
+import io.shieldmath.shield.axisymmetric.AxialFieldShielding;
+import io.shieldmath.shield.axisymmetric.Body;
+import io.shieldmath.shield.axisymmetric.CanEnd;
+import io.shieldmath.shield.axisymmetric.CoilCoupling;
+import io.shieldmath.shield.axisymmetric.EstimatedValue;
+import io.shieldmath.shield.axisymmetric.SaturationSolution;
+import io.shieldmath.shield.axisymmetric.SaturationStudy;
+import io.shieldmath.shield.axisymmetric.SensorRegion;
+import io.shieldmath.shield.axisymmetric.files.AxisymmetricDesign;
+import io.shieldmath.shield.axisymmetric.files.DesignBody;
+import io.shieldmath.shield.axisymmetric.files.DesignCoil;
+import io.shieldmath.shield.axisymmetric.files.DesignSensor;
+import io.shieldmath.shield.axisymmetric.files.WholeDesign;
+import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
+import io.shieldmath.shield.coupling.AmplitudeMeasure;
+import io.shieldmath.shield.coupling.Coil;
+import io.shieldmath.shield.coupling.DriveCurrent;
+import io.shieldmath.shield.coupling.CoilPair;
+import io.shieldmath.shield.coupling.CouplingEvaluation;
 import io.shieldmath.shield.design.Requirement;
-import io.shieldmath.shield.model.ShieldingModel;
-import io.shieldmath.shield.enclosure.Enclosure;
-import io.shieldmath.shield.enclosure.EnclosureEvaluation;
-import io.shieldmath.shield.enclosure.Opening;
-import io.shieldmath.shield.enclosure.SaturationCheck;
-import io.shieldmath.shield.enclosure.Shell;
-import io.shieldmath.shield.field.IncidentField;
-import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.materials.files.Design;
-import io.shieldmath.shield.materials.files.DesignFile;
-import io.shieldmath.shield.materials.files.DesignLayer;
+import io.shieldmath.shield.materials.MagnetizationCurves;
 import io.shieldmath.shield.materials.Material;
-import io.shieldmath.shield.planar.PlanarEvaluation;
+import io.shieldmath.shield.model.ShieldingModel;
+import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
@@ -38,9 +48,16 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.Paths;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.TreeSet;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.function.DoubleFunction;
 
 /**
  * The main example, a worked design study on an invented scenario (every number here is
@@ -50,22 +67,58 @@ import java.util.Locale;
  * coil of an inductive charger and 30 cm from a 50 Hz mains transformer. Which shield,
  * lightest first, keeps the interference at the sensor below its noise floor?
  *
- * <p>The program states the scenario, computes the required SE per band, evaluates flat
- * plates, a two-layer stack and vented cans, ranks them by mass against the requirement,
- * prints a report and writes into an output folder a CSV of the sweeps, the chosen
- * design as a JSON design file, and plots (PNG and SVG).
+ * <p>The program states the scenario, computes the required SE per band, and computes every
+ * candidate it may recommend with the axisymmetric finite-element solver: round plates of a
+ * stated size between each source and the sensor, and real cans (capped tubes with a cable hole
+ * in one cap, and an open tube) around the sensor in the ambient field. It ranks them by mass
+ * against the requirement and recommends the lightest that meets it. The same plates as
+ * infinite sheets between the same coils are computed beside them, as a separate, labelled
+ * comparison that is never recommended. It writes into an output folder a CSV of the results,
+ * the whole recommended design as a design file (version 3, with the study's mesh fineness, so
+ * that it evaluates to the printed numbers), the SE plot, and field maps of the bench case and
+ * of the recommended can (PNG and SVG).
+ *
+ * <p>Solves run on {@link Runtime#availableProcessors()} threads; results do not depend on the
+ * number of threads (the solver gives bit-identical results for equal inputs).
  */
 public final class DesignStudy {
 
-    /** Where the plate candidates sit: their area, for the mass (illustrative). */
-    static final double PLATE_AREA_M2 = 0.12 * 0.12;
-    /** The can's inner sides (illustrative). */
-    static final double[] CAN_SIDES_M = {0.08, 0.06, 0.03};
+    /** The round plates' radius: plates 120 mm across (illustrative). */
+    static final Length PLATE_RADIUS = mm(60);
+    /** How far in front of the sensor, towards the source, a plate's centre sits. */
+    static final Length PLATE_TO_SENSOR = mm(10);
+    /** The charger coil: a flat 20-turn loop of 20 mm radius, 6 cm from the sensor (illustrative). */
+    static final Coil CHARGER = Coil.loop(mm(20), 20);
+    /** The transformer's stray field, as a 100-turn loop of 40 mm radius 30 cm from the sensor. */
+    static final Coil TRANSFORMER = Coil.loop(mm(40), 100);
+    /** The sensor as the coils see it: a 3 mm loop, the fluxgate core's size (illustrative). */
+    static final Coil SENSOR_LOOP = Coil.loop(mm(3), 1);
+    static final Length CHARGER_DISTANCE = mm(60);
+    static final Length TRANSFORMER_DISTANCE = mm(300);
+    /** The cans' inner radius and overall length, and the cable hole's radius (illustrative). */
+    static final Length CAN_RADIUS = mm(15);
+    static final Length CAN_LENGTH = mm(60);
+    static final Length CABLE_HOLE = mm(3);
+    /** The sensor inside a can: a cylinder 3 mm in radius and 10 mm long at the centre. */
+    static final SensorRegion SENSOR = SensorRegion.cylinder(mm(3), mm(10));
     /** Below this frequency the transformer's field dominates, above it the charger's. */
     static final double SOURCE_SPLIT_HZ = 1000;
+    /**
+     * The solver's mesh fineness for every candidate: half the default, so that a 1 mm
+     * nickel-iron can at 60 kHz fits the solver's mesh cap and the study stays within a minute
+     * on two cores; each result's discretisation estimate is printed beside it.
+     */
+    static final double FINENESS = 0.5;
+    /** The frequencies of the sweep table and plot besides the requirement's. */
+    static final double[] SWEEP_HZ = {10, 100, 500, 2e3, 5e3, 1e4, 1e5, 2e5};
+    /** The points of the written design's own sweep, 10 Hz to 200 kHz. */
+    static final int DESIGN_POINTS = 19;
     /** The SE chart's size in pixels. */
     static final int CHART_WIDTH = 1000;
     static final int CHART_HEIGHT = 680;
+    /** The field maps' size in pixels. */
+    static final int MAP_WIDTH = 900;
+    static final int MAP_HEIGHT = 760;
 
     private DesignStudy() {
     }
@@ -81,13 +134,83 @@ public final class DesignStudy {
         run(System.out, out);
     }
 
-    /** One evaluated candidate. */
-    record Evaluated(String name, String kind, double massGrams, MarginReport margin, String limitingPath,
-                     List<DesignLayer> wall, double[] sweepDb, Shell shell) {
+    /**
+     * One candidate: a shield and how the solver evaluates it at a frequency.
+     *
+     * @param kind       "plate", "stack" or "can"
+     * @param name       what it is
+     * @param massGrams  its mass
+     * @param solved     true for the solver's finite shields, false for infinite-sheet comparisons
+     * @param seAt       SE in dB with its discretisation estimate at a frequency in Hz
+     * @param bodies     the bodies as a design file holds them (finite shields), or null
+     * @param evaluation the solver evaluation at the charger's frequencies (or the can's), or null
+     * @param material   a can's material, or null
+     */
+    record Candidate(String kind, String name, double massGrams, boolean solved, DoubleFunction<EstimatedValue> seAt,
+                     List<DesignBody> bodies, ShieldingModel<?> evaluation, Material material) {
+
+        Arrangement arrangement() {
+            return arrangementOf(bodies);
+        }
+
+        String label() {
+            return kind + ": " + name;
+        }
     }
 
-    /** What the study found, for callers and tests. */
-    public record Outcome(String recommended, Path designFile, Requirement requirement, Path outputFolder) {
+    /** A candidate with its SE at every frequency of the study and its margin per band. */
+    record Evaluated(Candidate candidate, double[] seDb, double[] estimateDb, List<Margin> margins) {
+
+        boolean meets() {
+            return margins.stream().allMatch(m -> m.marginDb() >= 0);
+        }
+
+        Margin worst() {
+            return margins.stream().min(Comparator.comparingDouble(Margin::marginDb)).orElseThrow();
+        }
+    }
+
+    /**
+     * The margin in one band of the requirement: the lowest SE at the band's sampled frequencies
+     * (a single frequency, or the ends and centre of a band), less the required SE.
+     *
+     * @param entry      the requirement's band
+     * @param hertz      where the lowest SE was found
+     * @param seDb       that SE
+     * @param estimateDb its discretisation estimate
+     * @param marginDb   SE − required
+     */
+    record Margin(Requirement.Entry entry, double hertz, double seDb, double estimateDb, double marginDb) {
+    }
+
+    /**
+     * What the study found, for callers and tests.
+     *
+     * @param recommended      the recommended design's label, or null if none meets the requirement
+     * @param designFile       the design file written, or null
+     * @param requirement      the requirement
+     * @param outputFolder     where the files went
+     * @param recommendedModel the solver evaluation of the recommended design, or null
+     * @param worstFrequency   where its margin is smallest, or null
+     * @param worstSeDb        its SE there as printed (rounded to 0.01 dB in the report)
+     */
+    public record Outcome(String recommended, Path designFile, Requirement requirement, Path outputFolder,
+                          ShieldingModel<?> recommendedModel, Frequency worstFrequency, double worstSeDb) {
+    }
+
+    /**
+     * The requirement of the scenario: the field each source makes at the board without a
+     * shield, and the sensor's 5 nT noise floor.
+     *
+     * @return the requirement
+     */
+    public static Requirement requirement() {
+        return Requirement.none()
+                .plus(FrequencyBand.at(Hz(50)), uT(2), nT(5))
+                .plus(FrequencyBand.at(Hz(150)), uT(0.5), nT(5))
+                .plus(FrequencyBand.of(kHz(19), kHz(21)), uT(8), nT(5))
+                .plus(FrequencyBand.of(kHz(38), kHz(42)), uT(1.5), nT(5))
+                .plus(FrequencyBand.of(kHz(57), kHz(63)), uT(0.6), nT(5));
     }
 
     /**
@@ -103,131 +226,301 @@ public final class DesignStudy {
         Catalogue catalogue = Catalogue.builtIn();
         Material copper = catalogue.get("copper-annealed");
         Material aluminium = catalogue.get("aluminium-6061-t6");
-        Material stainless = catalogue.get("stainless-304");
         Material nickelIron = catalogue.get("nickel-iron-80");
-
-        IncidentField transformer = IncidentField.magneticNearField(cm(30), ImpedanceForm.EXACT_DIPOLE);
-        IncidentField charger = IncidentField.magneticNearField(cm(6), ImpedanceForm.EXACT_DIPOLE);
-        Requirement need = Requirement.none()
-                .plus(FrequencyBand.at(Hz(50)), uT(2), nT(5))
-                .plus(FrequencyBand.at(Hz(150)), uT(0.5), nT(5))
-                .plus(FrequencyBand.of(kHz(19), kHz(21)), uT(8), nT(5))
-                .plus(FrequencyBand.of(kHz(38), kHz(42)), uT(1.5), nT(5))
-                .plus(FrequencyBand.of(kHz(57), kHz(63)), uT(0.6), nT(5));
-
+        Requirement need = requirement();
         printScenario(out, need);
-        double[] sweepHz = FrequencyBand.of(Hz(10), kHz(200)).logSpacedHertz(121);
 
-        List<Evaluated> results = new ArrayList<>();
-        // Flat plates and a stack between the sources and the board (infinite-sheet estimates).
-        results.add(plate("plate", "aluminium 6061, 2 mm", List.of(DesignLayer.of(aluminium, mm(2))),
-                transformer, charger, need, sweepHz));
-        results.add(plate("plate", "copper, 1 mm", List.of(DesignLayer.of(copper, mm(1))),
-                transformer, charger, need, sweepHz));
-        results.add(plate("plate", "stainless 304, 1 mm", List.of(DesignLayer.of(stainless, mm(1))),
-                transformer, charger, need, sweepHz));
-        results.add(plate("plate", "80 % nickel-iron, 1 mm", List.of(DesignLayer.of(nickelIron, mm(1))),
-                transformer, charger, need, sweepHz));
-        results.add(plate("stack", "Cu 0.5 mm | gap 1 mm | Ni-Fe 0.5 mm", List.of(DesignLayer.of(copper, mm(0.5)),
-                DesignLayer.gap(mm(1)), DesignLayer.of(nickelIron, mm(0.5))), transformer, charger, need, sweepHz));
-        // Closed cans around the board, vented, in the (locally uniform) ambient field.
-        Opening vent = Opening.holes(mm(3), 24).named("vent, 24 holes of 3 mm");
-        results.add(can("can", "Ni-Fe 1 mm, vented", Shell.box(len(0), len(1), len(2)).wall(nickelIron, mm(1)),
-                List.of(DesignLayer.of(nickelIron, mm(1))), vent, need, sweepHz));
-        results.add(can("can", "Ni-Fe 0.5 mm in Cu 0.5 mm, vented", Shell.box(len(0), len(1), len(2))
-                        .wall(nickelIron, mm(0.5)).thenGap(mm(2)).then(copper, mm(0.5)),
-                List.of(DesignLayer.of(copper, mm(0.5)), DesignLayer.gap(mm(2)), DesignLayer.of(nickelIron, mm(0.5))),
-                vent, need, sweepHz));
-        results.add(can("can", "aluminium 2 mm, vented", Shell.box(len(0), len(1), len(2)).wall(aluminium, mm(2)),
-                List.of(DesignLayer.of(aluminium, mm(2))), vent, need, sweepHz));
+        List<Candidate> candidates = new ArrayList<>();
+        // Round plates between each source and the sensor, and the same plates as infinite sheets.
+        candidates.addAll(plate("aluminium 6061, 2 mm", List.of(new Sheet(aluminium, mm(2)))));
+        candidates.addAll(plate("copper, 1 mm", List.of(new Sheet(copper, mm(1)))));
+        candidates.addAll(plate("80 % nickel-iron, 1 mm", List.of(new Sheet(nickelIron, mm(1)))));
+        candidates.addAll(plate("Cu 0.5 mm | gap 1 mm | Ni-Fe 0.5 mm", List.of(new Sheet(copper, mm(0.5)),
+                new Sheet(null, mm(1)), new Sheet(nickelIron, mm(0.5)))));
+        // Cans around the sensor in the ambient field, taken along the can's axis.
+        candidates.add(can("Ni-Fe 1 mm, capped, cable hole", nickelIron, mm(1), true));
+        candidates.add(can("Ni-Fe 0.5 mm, capped, cable hole", nickelIron, mm(0.5), true));
+        candidates.add(can("Ni-Fe 1 mm, open tube", nickelIron, mm(1), false));
+        candidates.add(can("aluminium 2 mm, capped, cable hole", aluminium, mm(2), true));
 
-        Evaluated best = printRanking(out, results);
+        double[] hz = studyFrequencies(need);
+        List<Evaluated> results = evaluate(candidates, hz, need);
+        List<Evaluated> solved = results.stream().filter(e -> e.candidate().solved()).toList();
+        List<Evaluated> sheets = results.stream().filter(e -> !e.candidate().solved()).toList();
+
+        Evaluated best = printRanking(out, solved);
+        printSheetComparison(out, sheets, solved, hz);
         printSaturation(out, best, need);
         printCautions(out);
 
-        writeCsv(folder.resolve("sweeps.csv"), sweepHz, results);
+        writeCsv(folder.resolve("sweeps.csv"), hz, results);
         Path design = folder.resolve("chosen-design.json");
         if (best != null) {
-            Design d = Design.of(best.wall(), charger, FrequencyBand.of(Hz(10), kHz(200)), 61)
-                    .withTitle(best.kind() + ": " + best.name() + " (wall stack, source side first)");
-            DesignFile.write(d, design);
+            writeDesign(best, need, design);
         }
         SeChart chart = SeChart.titled("Candidate shields for the magnetometer board (illustrative)")
                 .requiring(need)
                 .switchingSourceAt(Hz(SOURCE_SPLIT_HZ), "transformer at 30 cm", "charger at 6 cm");
         for (Evaluated e : results) {
-            chart = chart.plus(SeChart.Kind.valueOf(e.kind().toUpperCase(Locale.ROOT)), e.name(), sweepHz, e.sweepDb());
+            chart = chart.plus(chartKind(e.candidate()), e.candidate().name(), hz, e.seDb());
         }
         if (best != null) {
-            chart = chart.recommending(SeChart.Kind.valueOf(best.kind().toUpperCase(Locale.ROOT)), best.name());
+            chart = chart.recommending(chartKind(best.candidate()), best.candidate().name());
         }
         chart.writePng(folder.resolve("se-vs-frequency.png"), CHART_WIDTH, CHART_HEIGHT);
         chart.writeSvg(folder.resolve("se-vs-frequency.svg"), CHART_WIDTH, CHART_HEIGHT);
+        List<String> maps = writeFieldMaps(folder, copper, best, need);
         out.println();
-        out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, chosen-design.json, "
-                + "se-vs-frequency.png, se-vs-frequency.svg");
-        return new Outcome(best == null ? null : best.kind() + ": " + best.name(), best == null ? null : design,
-                need, folder);
+        out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, " + (best == null ? "" : "chosen-design.json, ")
+                + "se-vs-frequency.png, se-vs-frequency.svg" + (maps.isEmpty() ? "" : ", " + String.join(", ", maps)));
+        if (best == null) {
+            return new Outcome(null, null, need, folder, null, null, Double.NaN);
+        }
+        Margin w = best.worst();
+        return new Outcome(best.candidate().label(), design, need, folder, best.candidate().evaluation(),
+                Frequency.ofHertz(w.hertz()), w.seDb());
     }
 
-    private static Length len(int i) {
-        return Length.ofMetres(CAN_SIDES_M[i]);
+    /**
+     * Field maps of the bench case (the 1 mm copper plate between the charger coil and the
+     * sensor at 20 kHz, 1 A peak in the charger coil) and of the recommended can at its worst
+     * frequency in the ambient field of that band.
+     */
+    private static List<String> writeFieldMaps(Path folder, Material copper, Evaluated best, Requirement need)
+            throws IOException {
+        List<String> written = new ArrayList<>();
+        Arrangement bench = arrangementOf(plateBodies(List.of(new Sheet(copper, mm(1))), CHARGER_DISTANCE));
+        CoilPair pair = coils(true);
+        Frequency f = kHz(20);
+        FieldMapPicture benchMap = FieldMapPicture.around(bench, pair,
+                        bench.between(pair).withFineness(FINENESS).at(f), DriveCurrent.ofAmperes(1, AmplitudeMeasure.PEAK, f))
+                .titled(String.format(Locale.ROOT, "Copper plate 1 mm, %.0f mm across, charger coil to sensor, 20 kHz "
+                        + "(1 A peak; illustrative)", 2 * PLATE_RADIUS.toMetres() * 1e3));
+        benchMap.writePng(folder.resolve("field-map-bench.png"), MAP_WIDTH, MAP_HEIGHT);
+        benchMap.writeSvg(folder.resolve("field-map-bench.svg"), MAP_WIDTH, MAP_HEIGHT);
+        written.add("field-map-bench.png");
+        written.add("field-map-bench.svg");
+        if (best != null && best.candidate().evaluation() instanceof AxialFieldShielding can) {
+            Margin w = best.worst();
+            Frequency at = Frequency.ofHertz(w.hertz());
+            FieldMapPicture canMap = FieldMapPicture.around(best.candidate().arrangement(), can.at(at),
+                            w.entry().incident())
+                    .titled("Recommended " + best.candidate().label() + ", in " + w.entry().incident() + " along its axis at "
+                            + at + " (illustrative)");
+            canMap.writePng(folder.resolve("field-map-can.png"), MAP_WIDTH, MAP_HEIGHT);
+            canMap.writeSvg(folder.resolve("field-map-can.svg"), MAP_WIDTH, MAP_HEIGHT);
+            written.add("field-map-can.png");
+            written.add("field-map-can.svg");
+        }
+        return written;
     }
 
-    /** The planar model with the field of whichever source dominates at each frequency. */
-    static ShieldingModel<?> twoSources(PlanarEvaluation nearTransformer, PlanarEvaluation nearCharger) {
-        return ShieldingModel.ofFunction(nearTransformer.barrier() + ", nearer source per band",
-                nearTransformer.validBand(),
-                hz -> (hz < SOURCE_SPLIT_HZ ? nearTransformer : nearCharger).shieldingEffectivenessDb(hz));
+    /** How the chart draws a candidate: by its kind, infinite sheets as comparisons. */
+    private static SeChart.Kind chartKind(Candidate c) {
+        return c.solved() ? SeChart.Kind.valueOf(c.kind().toUpperCase(Locale.ROOT)) : SeChart.Kind.SHEET;
     }
 
-    private static Evaluated plate(String kind, String name, List<DesignLayer> layers, IncidentField transformer,
-                                   IncidentField charger, Requirement need, double[] sweepHz) {
-        var barrier = io.shieldmath.shield.planar.Barrier.of(layers.stream().map(DesignLayer::toLayer).toList());
-        ShieldingModel<?> model = twoSources(barrier.facing(transformer), barrier.facing(charger));
+    /** The coils of the charger (above the source split) or of the transformer (below it). */
+    static CoilPair coils(boolean charger) {
+        return charger ? CoilPair.coaxial(CHARGER, SENSOR_LOOP, CHARGER_DISTANCE)
+                : CoilPair.coaxial(TRANSFORMER, SENSOR_LOOP, TRANSFORMER_DISTANCE);
+    }
+
+    /**
+     * One layer of a plate or stack, source side first.
+     *
+     * @param material  the layer's material, or null for an air gap
+     * @param thickness its thickness
+     */
+    record Sheet(Material material, Length thickness) {
+
+        Layer layer() {
+            return material == null ? Layer.gap(thickness) : Layer.of(material, thickness);
+        }
+    }
+
+    /**
+     * The bodies of a plate or stack, source side first, its centre {@link #PLATE_TO_SENSOR}
+     * in front of the sensor between coils of the given separation: round plates of
+     * {@link #PLATE_RADIUS}, the gaps left as air.
+     */
+    static List<DesignBody> plateBodies(List<Sheet> sheets, Length separation) {
+        double total = sheets.stream().mapToDouble(l -> l.thickness().toMetres()).sum();
+        // The sensor sits at +separation/2; the stack's centre PLATE_TO_SENSOR before it.
+        double z = separation.toMetres() / 2 - PLATE_TO_SENSOR.toMetres() - total / 2;
+        List<DesignBody> bodies = new ArrayList<>();
+        for (int i = 0; i < sheets.size(); i++) {
+            Sheet l = sheets.get(i);
+            if (l.material() != null) {
+                DesignBody b = DesignBody.disc(i == 0 ? "plate" : "plate layer " + (i + 1), l.material(), PLATE_RADIUS,
+                        l.thickness());
+                double centre = z + l.thickness().toMetres() / 2;
+                bodies.add(centre >= 0 ? b.shiftedBy(Length.ofMetres(centre)) : b.shiftedBackBy(Length.ofMetres(-centre)));
+            }
+            z += l.thickness().toMetres();
+        }
+        return List.copyOf(bodies);
+    }
+
+    static Arrangement arrangementOf(List<DesignBody> bodies) {
+        return Arrangement.of(bodies.stream().map(DesignBody::body).toList());
+    }
+
+    /** A finite plate (or stack) computed by the solver, and the same layers as an infinite sheet. */
+    private static List<Candidate> plate(String name, List<Sheet> sheets) {
+        String kind = sheets.size() > 1 ? "stack" : "plate";
         double mass = 0;
-        for (DesignLayer l : layers) {
-            if (l.material().isPresent()) {
-                mass += l.material().get().arealMass(l.thickness()).toKilogramsPerSquareMetre() * PLATE_AREA_M2 * 1000;
+        for (Sheet l : sheets) {
+            if (l.material() != null) {
+                mass += l.material().arealMass(l.thickness()).toKilogramsPerSquareMetre()
+                        * Math.PI * Math.pow(PLATE_RADIUS.toMetres(), 2) * 1000;
             }
         }
-        return new Evaluated(name, kind, mass, need.marginOf(model), "the plate (edges ignored)", layers,
-                sweep(model, sweepHz), null);
+        List<DesignBody> nearBodies = plateBodies(sheets, CHARGER_DISTANCE);
+        CoilCoupling near = arrangementOf(nearBodies).between(coils(true)).withFineness(FINENESS);
+        CoilCoupling far = arrangementOf(plateBodies(sheets, TRANSFORMER_DISTANCE)).between(coils(false))
+                .withFineness(FINENESS);
+        Candidate finite = new Candidate(kind, name + String.format(Locale.ROOT, ", %.0f mm across",
+                2 * PLATE_RADIUS.toMetres() * 1e3), mass, true,
+                hz -> (hz < SOURCE_SPLIT_HZ ? far : near).at(Frequency.ofHertz(hz)).insertionLossEstimated(),
+                nearBodies, near, null);
+        Barrier barrier = Barrier.of(sheets.stream().map(Sheet::layer).toList());
+        CouplingEvaluation sheetNear = coils(true).through(barrier);
+        CouplingEvaluation sheetFar = coils(false).through(barrier);
+        Candidate sheet = new Candidate(kind, name, mass, false,
+                hz -> new EstimatedValue((hz < SOURCE_SPLIT_HZ ? sheetFar : sheetNear).shieldingEffectivenessDb(hz), 0),
+                null, sheetNear, null);
+        return List.of(finite, sheet);
     }
 
-    private static Evaluated can(String kind, String name, Shell shell, List<DesignLayer> wallSourceSideFirst,
-                                 Opening vent, Requirement need, double[] sweepHz) {
-        EnclosureEvaluation e = Enclosure.of(shell).withOpening(vent).inUniformField();
-        MarginReport margin = need.marginOf(e);
-        String limiting = e.at(margin.worst().frequency()).limitingPath().name();
-        double area = 2 * (CAN_SIDES_M[0] * CAN_SIDES_M[1] + CAN_SIDES_M[1] * CAN_SIDES_M[2]
-                + CAN_SIDES_M[0] * CAN_SIDES_M[2]);
-        double mass = 0;
-        for (DesignLayer l : wallSourceSideFirst) {
-            if (l.material().isPresent()) {
-                mass += l.material().get().arealMass(l.thickness()).toKilogramsPerSquareMetre() * area * 1000;
+    /**
+     * A can of the study's size around the sensor, in the ambient field taken as uniform and
+     * along the can's axis: capped at both ends with the cable hole in the upper cap, or an
+     * open tube.
+     */
+    private static Candidate can(String name, Material material, Length wall, boolean capped) {
+        DesignBody body = DesignBody.can("can", material, CAN_RADIUS, wall, CAN_LENGTH);
+        body = capped ? body.withCapHole(CanEnd.UPPER, CABLE_HOLE) : body.withoutCap(CanEnd.LOWER).withoutCap(CanEnd.UPPER);
+        AxialFieldShielding e = arrangementOf(List.of(body)).inUniformAxialField().sensing(SENSOR).withFineness(FINENESS);
+        return new Candidate("can", name, canMassGrams(material, wall, capped), true,
+                hz -> e.at(Frequency.ofHertz(hz)).worstShieldingDb(), List.of(body), e, material);
+    }
+
+    /** A can's mass: the tube between the caps, two caps, less the cable hole (or an open tube). */
+    static double canMassGrams(Material material, Length wall, boolean capped) {
+        double a = CAN_RADIUS.toMetres();
+        double w = wall.toMetres();
+        double l = CAN_LENGTH.toMetres();
+        double outer = Math.PI * (a + w) * (a + w);
+        double volume = capped
+                ? (outer - Math.PI * a * a) * (l - 2 * w) + 2 * outer * w
+                        - Math.PI * CABLE_HOLE.toMetres() * CABLE_HOLE.toMetres() * w
+                : (outer - Math.PI * a * a) * l;
+        return volume * material.density().toKilogramsPerCubicMetre() * 1000;
+    }
+
+    /** The requirement's frequencies (each band's ends and centre) and the sweep's, sorted. */
+    static double[] studyFrequencies(Requirement need) {
+        TreeSet<Double> all = new TreeSet<>();
+        for (double f : SWEEP_HZ) {
+            all.add(f);
+        }
+        for (Requirement.Entry e : need.entries()) {
+            for (double f : bandSamples(e.band())) {
+                all.add(f);
             }
         }
-        return new Evaluated(name, kind, mass, margin, limiting, wallSourceSideFirst, sweep(e, sweepHz), shell);
+        return all.stream().mapToDouble(Double::doubleValue).toArray();
     }
 
-    private static double[] sweep(ShieldingModel<?> m, double[] hz) {
-        return m.shieldingEffectivenessDb(hz, new double[hz.length]);
+    /** A single frequency, or a band's ends and its (geometric) centre. */
+    static double[] bandSamples(FrequencyBand band) {
+        double lo = band.low().toHertz();
+        double hi = band.high().toHertz();
+        return lo == hi ? new double[] {lo} : band.logSpacedHertz(3);
+    }
+
+    /** Every candidate at every frequency, on all cores, the slowest solves first. */
+    private static List<Evaluated> evaluate(List<Candidate> candidates, double[] hz, Requirement need) {
+        int n = candidates.size();
+        EstimatedValue[][] values = new EstimatedValue[n][hz.length];
+        ExecutorService pool = Executors.newFixedThreadPool(Runtime.getRuntime().availableProcessors());
+        try {
+            List<Future<?>> jobs = new ArrayList<>();
+            // Cans at high frequency cost most: submit from the highest frequency down, cans first.
+            List<Integer> order = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                order.add(i);
+            }
+            order.sort(Comparator.comparing((Integer i) -> !candidates.get(i).kind().equals("can")));
+            for (int j = hz.length - 1; j >= 0; j--) {
+                for (int i : order) {
+                    int ci = i;
+                    int fj = j;
+                    jobs.add(pool.submit(() -> {
+                        values[ci][fj] = candidates.get(ci).seAt().apply(hz[fj]);
+                    }));
+                }
+            }
+            for (Future<?> f : jobs) {
+                f.get();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("the study was interrupted", e);
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            throw new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+        List<Evaluated> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            double[] se = new double[hz.length];
+            double[] est = new double[hz.length];
+            for (int j = 0; j < hz.length; j++) {
+                se[j] = values[i][j].value();
+                est[j] = values[i][j].estimate();
+            }
+            List<Margin> margins = new ArrayList<>();
+            for (Requirement.Entry e : need.entries()) {
+                Margin worst = null;
+                for (double f : bandSamples(e.band())) {
+                    int j = Arrays.binarySearch(hz, f);
+                    Margin m = new Margin(e, f, se[j], est[j], se[j] - e.requiredDb());
+                    if (worst == null || m.marginDb() < worst.marginDb()) {
+                        worst = m;
+                    }
+                }
+                margins.add(worst);
+            }
+            out.add(new Evaluated(candidates.get(i), se, est, List.copyOf(margins)));
+        }
+        return out;
     }
 
     private static void printScenario(PrintStream out, Requirement need) {
-        out.println("shield design study: a magnetometer board between a charger coil and a transformer");
-        out.println("=================================================================================");
+        String title = "shield design study: a magnetometer board between a charger coil and a transformer";
+        out.println(title);
+        out.println("=".repeat(title.length()));
         out.println("Scenario (illustrative, invented for this example): a fluxgate magnetometer board in a");
         out.println("lab instrument sits 6 cm from the 20 kHz coil of an inductive charger and 30 cm from a");
         out.println("50 Hz mains transformer. The sensor's noise floor is 5 nT; interference must stay below.");
-        out.println("Assumptions: magnetic near fields with the exact dipole wave impedance; plates are");
-        out.println(String.format(Locale.ROOT, "infinite sheets of %.0f cm x %.0f cm for their mass; cans are "
-                + "closed boxes of %.0f x %.0f x %.0f cm", Math.sqrt(PLATE_AREA_M2) * 100,
-                Math.sqrt(PLATE_AREA_M2) * 100, CAN_SIDES_M[0] * 100, CAN_SIDES_M[1] * 100, CAN_SIDES_M[2] * 100));
-        out.println("in the locally uniform ambient field, each with a vent; plates see the transformer's");
-        out.println("field (30 cm) below 1 kHz and the charger's (6 cm) above; materials from the built-in");
-        out.println("catalogue at 20 °C.");
+        out.println("Every candidate below is computed by the axisymmetric finite-element solver:");
+        out.println(String.format(Locale.ROOT, "- round plates %.0f mm across, %.0f mm in front of the sensor, on the axis from each",
+                2 * PLATE_RADIUS.toMetres() * 1e3, PLATE_TO_SENSOR.toMetres() * 1e3));
+        out.println("  source (the charger a 20 mm loop, the transformer a 40 mm loop) to the sensor (a 3 mm loop);");
+        out.println("  the transformer's field below 1 kHz, the charger's above;");
+        out.println(String.format(Locale.ROOT, "- cans of %.0f mm inner radius, %.0f mm long, around the sensor (a cylinder 3 mm in",
+                CAN_RADIUS.toMetres() * 1e3, CAN_LENGTH.toMetres() * 1e3));
+        out.println(String.format(Locale.ROOT, "  radius, 10 mm long): capped with a %.0f mm cable hole in one cap, or open; in the",
+                2 * CABLE_HOLE.toMetres() * 1e3));
+        out.println("  locally uniform ambient field along the can's axis (the worst point of the sensor counts).");
+        out.println(String.format(Locale.ROOT, "Mesh fineness %.1f; each SE carries its discretisation estimate (±). Bands are",
+                FINENESS));
+        out.println("sampled at their ends and centre. Materials from the built-in catalogue at 20 °C.");
         out.println();
         out.println("Required shielding per band");
         out.println(String.format(Locale.ROOT, "  %-22s %12s %12s %10s", "band", "incident", "tolerated",
@@ -239,47 +532,56 @@ public final class DesignStudy {
         out.println();
     }
 
-    private static Evaluated printRanking(PrintStream out, List<Evaluated> results) {
-        List<Evaluated> sorted = new ArrayList<>(results);
-        sorted.sort(Comparator.comparing((Evaluated e) -> !e.margin().meets()).thenComparingDouble(Evaluated::massGrams));
-        out.println("Candidates, meeting designs first, lightest first within each group");
-        out.println(String.format(Locale.ROOT, "  %-5s %-36s %9s %10s %12s  %-6s %s", "kind", "design", "mass",
-                "margin", "worst at", "meets", "limited by"));
+    private static Evaluated printRanking(PrintStream out, List<Evaluated> solved) {
+        List<Evaluated> sorted = new ArrayList<>(solved);
+        sorted.sort(Comparator.comparing((Evaluated e) -> !e.meets())
+                .thenComparingDouble(e -> e.candidate().massGrams()));
+        out.println("Candidates computed by the solver, meeting designs first, lightest first within each group");
+        out.println(String.format(Locale.ROOT, "  %-5s %-50s %7s %18s %10s %10s  %s", "kind", "design", "mass",
+                "SE at worst", "margin", "worst at", "meets"));
         Evaluated best = null;
-        Evaluated bestPlate = null;
         for (Evaluated e : sorted) {
-            MarginReport.Line w = e.margin().worst();
-            out.println(String.format(Locale.ROOT, "  %-5s %-36s %7.0f g %7.1f dB %12s  %-6s %s", e.kind(), e.name(),
-                    e.massGrams(), w.marginDb(), w.frequency(), e.margin().meets() ? "yes" : "no", e.limitingPath()));
-            if (e.margin().meets() && e.kind().equals("can") && best == null) {
+            Margin w = e.worst();
+            out.println(String.format(Locale.ROOT, "  %-5s %-50s %5.0f g %8.2f ± %4.2f dB %7.1f dB %10s  %s",
+                    e.candidate().kind(), e.candidate().name(), e.candidate().massGrams(), w.seDb(), w.estimateDb(),
+                    w.marginDb(), Frequency.ofHertz(w.hertz()), e.meets() ? "yes" : "no"));
+            if (best == null && e.meets()) {
                 best = e;
-            }
-            if (e.margin().meets() && !e.kind().equals("can") && bestPlate == null) {
-                bestPlate = e;
             }
         }
         out.println();
-        if (best == null && bestPlate != null) {
-            out.println("No closed can meets the requirement; only an infinite-sheet estimate does, which real");
-            out.println("plates will not reach. Taking it anyway, as the best available lead:");
-            best = bestPlate;
-        }
         if (best == null) {
             out.println("No candidate meets the requirement: add thickness, a second layer or a closed can.");
         } else {
-            out.println(String.format(Locale.ROOT, "Recommended: %s: %s, %.0f g, worst margin %.1f dB at %s.",
-                    best.kind(), best.name(), best.massGrams(), best.margin().worstMarginDb(),
-                    best.margin().worst().frequency()));
+            Margin w = best.worst();
+            out.println(String.format(Locale.ROOT, "Recommended: %s, %.0f g: worst margin %.1f dB at %s, where the "
+                    + "solver gives SE %.2f ± %.2f dB.", best.candidate().label(), best.candidate().massGrams(),
+                    w.marginDb(), Frequency.ofHertz(w.hertz()), w.seDb(), w.estimateDb()));
         }
-        out.println("The recommendation is the lightest closed can that meets every band. Plate and stack");
-        out.println("numbers are infinite-sheet estimates shown for comparison: field leaking around the edges");
-        out.println("of a real plate limits it (often to 10-20 dB), so they are not recommended on their own.");
         return best;
     }
 
-    /** The saturation check of the recommended can's high-µ walls in the strongest incident field. */
+    private static void printSheetComparison(PrintStream out, List<Evaluated> sheets, List<Evaluated> solved,
+                                             double[] hz) {
+        out.println();
+        out.println("For comparison only, never recommended: the same plates as infinite sheets between the");
+        out.println("same coils (exact infinite-sheet coupling). Flux rounds a real plate's rim, so the sheet");
+        out.println("figure overstates it; the difference is shown at the finite plate's worst frequency.");
+        out.println(String.format(Locale.ROOT, "  %-5s %-36s %15s %15s %13s", "kind", "layers", "sheet margin",
+                "plate margin", "sheet above"));
+        for (Evaluated sheet : sheets) {
+            Evaluated plate = solved.stream().filter(e -> e.candidate().name().startsWith(sheet.candidate().name()))
+                    .findFirst().orElseThrow();
+            Margin pw = plate.worst();
+            int j = Arrays.binarySearch(hz, pw.hertz());
+            out.println(String.format(Locale.ROOT, "  %-5s %-36s %12.1f dB %12.1f dB %10.1f dB", sheet.candidate().kind(),
+                    sheet.candidate().name(), sheet.worst().marginDb(), pw.marginDb(), sheet.seDb()[j] - plate.seDb()[j]));
+        }
+    }
+
+    /** The solver's static saturation check of the recommended can in the strongest ambient field. */
     private static void printSaturation(PrintStream out, Evaluated best, Requirement need) {
-        if (best == null || best.shell() == null) {
+        if (best == null || !best.candidate().kind().equals("can")) {
             return;
         }
         MagneticFluxDensity strongest = MagneticFluxDensity.ofTesla(0);
@@ -288,44 +590,66 @@ public final class DesignStudy {
                 strongest = e.incident();
             }
         }
-        for (DesignLayer l : best.wall()) {
-            if (l.material().isPresent() && l.material().get().saturation().isPresent()) {
-                SaturationCheck c = best.shell().saturation(MagneticFieldStrength.from(strongest),
-                        l.material().get().saturation().get());
-                double worst = 0;
-                for (int i = 0; i < c.wallCount(); i++) {
-                    worst = Math.max(worst, c.fractionOfSaturation(i));
-                }
-                out.println(String.format(Locale.ROOT, "Saturation (static check, strongest ambient field %s):%n"
-                        + "  the %s wall carries at most %.2g %% of its saturation flux density (%s)%s.", strongest,
-                        l.material().get().name(), 100 * worst, l.material().get().saturation().get(),
-                        c.isWarning() ? "; WARNING: near saturation, thicken the wall" : ", far from saturation"));
-                return;
-            }
+        Body can = best.candidate().arrangement().bodies().get(0);
+        Material material = best.candidate().material();
+        out.println();
+        if (!material.isFerromagnetic()) {
+            out.println("Saturation: the recommended can is not ferromagnetic; no saturation check needed.");
+            return;
         }
+        SaturationSolution s = SaturationStudy.of(best.candidate().arrangement().inUniformAxialField().sensing(SENSOR))
+                .withCurve(can.name(), MagnetizationCurves.builtIn().get(material.id())).withFineness(FINENESS)
+                .magnetostatic(MagneticFieldStrength.from(strongest));
+        double peak = s.peakFluxDensity(can.name()).toTesla();
+        out.println(String.format(Locale.ROOT, "Saturation (solver, static, the catalogue's B-H curve, the strongest "
+                + "ambient field, %s, held static):%n  the can's wall carries at most %.3g mT, %s.", strongest, peak * 1e3,
+                s.isNearSaturation(can.name()) ? "WARNING: near saturation, thicken the wall"
+                        : "far from saturation"));
+    }
+
+    /**
+     * Writes the recommended design as a whole design (version 3 of the design file): the
+     * can and the sensor region in the ambient field, or the plate between the charger coil
+     * and the sensor, with every band of the requirement as a source case and the study's mesh
+     * fineness, so that the file evaluates to the numbers the study printed.
+     */
+    private static void writeDesign(Evaluated best, Requirement need, Path file) throws IOException {
+        Candidate c = best.candidate();
+        FrequencyBand band = FrequencyBand.of(Hz(10), kHz(200));
+        AxisymmetricDesign d = c.kind().equals("can")
+                ? AxisymmetricDesign.inUniformAxialField(c.bodies(), DesignSensor.cylinder(mm(3), mm(10)), band,
+                        DESIGN_POINTS)
+                : AxisymmetricDesign.betweenCoils(c.bodies(), DesignCoil.loop(CHARGER.radius(), CHARGER.turns()),
+                        DesignCoil.loop(SENSOR_LOOP.radius(), SENSOR_LOOP.turns()), CHARGER_DISTANCE, band,
+                        DESIGN_POINTS);
+        WholeDesignFile.write(WholeDesign.of(d.withFineness(FINENESS).meeting(need)
+                .withTitle(c.label() + " (magnetometer board study)")), file);
     }
 
     private static void printCautions(PrintStream out) {
         out.println();
         out.println("Cautions");
-        out.println("  These are estimates for idealised geometry. Real shields are limited by seams, openings,");
-        out.println("  fasteners and edges; verify by measurement (IEEE Std 299 for enclosures, ASTM D4935 for");
-        out.println("  planar materials). High-permeability alloys lose permeability when bent or drilled after");
+        out.println("  These are estimates for idealised geometry: bodies of revolution on one axis, the field");
+        out.println("  along it. Real shields are limited by seams, openings, fasteners and fields across the");
+        out.println("  axis; verify by measurement (IEEE Std 299 for enclosures, ASTM D4935 for planar");
+        out.println("  materials). High-permeability alloys lose permeability when bent or drilled after");
         out.println("  annealing and saturate in strong fields. Mains transformers and chargers carry hazardous");
-        out.println("  voltages; strong fields have exposure limits (ICNIRP, IEEE C95.1). Medical, safety and");
-        out.println("  compliance work must follow local codes and licensed, qualified practice.");
+        out.println("  voltages; strong alternating fields heat plates and cans and have exposure limits");
+        out.println("  (ICNIRP, IEEE C95.1). Medical, safety and compliance work must follow local codes and");
+        out.println("  licensed, qualified practice.");
     }
 
     private static void writeCsv(Path file, double[] hz, List<Evaluated> results) throws IOException {
         StringBuilder s = new StringBuilder("frequency_hz");
         for (Evaluated e : results) {
-            s.append(",\"").append(e.kind()).append(": ").append(e.name()).append(" (SE dB)\"");
+            s.append(",\"").append(e.candidate().label()).append(e.candidate().solved() ? " (SE dB)\""
+                    : " (infinite sheet, comparison only, SE dB)\"");
         }
         s.append('\n');
         for (int i = 0; i < hz.length; i++) {
             s.append(String.format(Locale.ROOT, "%.6g", hz[i]));
             for (Evaluated e : results) {
-                s.append(String.format(Locale.ROOT, ",%.4f", e.sweepDb()[i]));
+                s.append(String.format(Locale.ROOT, ",%.4f", e.seDb()[i]));
             }
             s.append('\n');
         }

@@ -301,6 +301,17 @@ class JShellToolIT {
         stated(u, "r.shieldingEffectivenessDb()");
         stated(u, "r.planarEstimate().shieldingEffectivenessDb()");
         stated(u, "millivolts(AmplitudeMeasure.PEAK_TO_PEAK)");
+        stated(u, "p.finitePlateDb()");
+        stated(u, "p.infiniteSheetAboveDb()");
+        stated(u, "a.measuredDb()");
+        assertTrue(unitWith(u, "a.verdict()").output().contains("CONSISTENT"), () -> unitWith(u, "a.verdict()").output());
+        assertTrue(unitWith(u, "a.infiniteSheetVerdict()").output().contains("BELOW_MODEL"),
+                () -> unitWith(u, "a.infiniteSheetVerdict()").output());
+    }
+
+    static Unit unitWith(List<Unit> units, String fragment) {
+        return units.stream().filter(u -> u.source().contains(fragment)).findFirst()
+                .orElseThrow(() -> new AssertionError("no line with " + fragment));
     }
 
     @Test
@@ -354,11 +365,50 @@ class JShellToolIT {
     }
 
     @Test
+    void plateOnBenchScriptPrintsTheSolversPredictionAtEachFrequency() throws Exception {
+        String out = String.join("", paste("plate-on-bench.jsh", script("plate-on-bench.jsh"), false).stream()
+                .map(Unit::output).toList());
+        Matcher m = Pattern.compile("(\\d+ kHz)\\s+plate\\s+([0-9.]+) ± ([0-9.]+) dB\\s+sheet\\s+([0-9.]+) dB\\s+"
+                + "receiver ([0-9.]+) mV pp without, ([0-9.]+) mV pp with").matcher(out);
+        // The same bench computed here, in this JVM, through the library: the script must print its numbers.
+        io.shieldmath.shield.coupling.CoilPair pair = io.shieldmath.shield.coupling.CoilPair.coaxial(
+                io.shieldmath.shield.coupling.Coil.loop(io.shieldmath.shield.quantity.Length.ofMillimetres(10), 20),
+                io.shieldmath.shield.coupling.Coil.loop(io.shieldmath.shield.quantity.Length.ofMillimetres(10), 20),
+                io.shieldmath.shield.quantity.Length.ofMillimetres(50));
+        io.shieldmath.shield.axisymmetric.BenchPrediction bench = io.shieldmath.shield.axisymmetric.BenchPrediction
+                .ofPlate(io.shieldmath.shield.materials.Catalogue.builtIn().get("aluminium-1100-o"),
+                        io.shieldmath.shield.quantity.Length.ofMillimetres(25),
+                        io.shieldmath.shield.quantity.Length.ofMillimetres(2), pair);
+        int rows = 0;
+        String readme = readme();
+        while (m.find()) {
+            rows++;
+            var f = io.shieldmath.shield.quantity.Frequency.parse(m.group(1));
+            var p = bench.at(f);
+            var drive = io.shieldmath.shield.coupling.DriveCurrent.ofMilliamperes(100,
+                    io.shieldmath.shield.coupling.AmplitudeMeasure.RMS, f);
+            var pp = io.shieldmath.shield.coupling.AmplitudeMeasure.PEAK_TO_PEAK;
+            double[] expected = {p.finitePlateDb().value(), p.finitePlateDb().estimate(), p.infiniteSheetDb(),
+                p.voltageWithoutPlate(drive).millivolts(pp), p.voltageWithPlate(drive).millivolts(pp)};
+            for (int i = 0; i < expected.length; i++) {
+                String text = m.group(i + 2);
+                assertEquals(expected[i], Double.parseDouble(text), halfUnitOfLastDigit(text), m.group());
+            }
+            // Common practice, no source: the finite plate reads below the infinite sheet (flux rounds its rim).
+            assertTrue(expected[0] < expected[2], m.group());
+            // The README shows the script's output.
+            assertTrue(readme.contains(m.group().strip()), "README does not show " + m.group());
+        }
+        assertEquals(3, rows, out);
+    }
+
+    @Test
     void everyScriptInTheFolderIsCovered() throws IOException {
         try (var files = Files.list(Paths.get("jshell"))) {
             List<String> names = files.map(p -> p.getFileName().toString()).filter(n -> n.endsWith(".jsh"))
                     .sorted().toList();
-            assertEquals(List.of("quick-look.jsh", "thinnest-copper.jsh"), names, "add a test for each new script");
+            assertEquals(List.of("plate-on-bench.jsh", "quick-look.jsh", "thinnest-copper.jsh"), names,
+                    "add a test for each new script");
         }
     }
 }

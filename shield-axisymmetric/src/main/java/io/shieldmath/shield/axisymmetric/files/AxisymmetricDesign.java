@@ -52,6 +52,9 @@ import java.util.Optional;
  */
 public final class AxisymmetricDesign {
 
+    /** The solver's default mesh fineness, which a design file need not state. */
+    public static final double DEFAULT_FINENESS = 1;
+
     /** The most evaluation points. */
     public static final int MAX_POINTS = CoilCoupling.MAX_SWEEP_POINTS;
 
@@ -66,6 +69,7 @@ public final class AxisymmetricDesign {
     private final DesignSensor sensor;
     private final MagneticFluxDensity applied;
     private final Decibels tolerance;
+    private final double fineness;
     private final FrequencyBand band;
     private final int points;
     private final Requirement requirement;
@@ -76,7 +80,8 @@ public final class AxisymmetricDesign {
     private AxisymmetricDesign(String title, List<DesignBody> bodies, DesignCoil transmitter, DesignCoil receiver,
                                Length separation, CurrentAmplitude drive,
                                AmplitudeMeasure driveMeasure, DesignSensor sensor, MagneticFluxDensity applied,
-                               Decibels tolerance, FrequencyBand band, int points, Requirement requirement,
+                               Decibels tolerance, double fineness, FrequencyBand band, int points,
+                               Requirement requirement,
                                Spelling spelling, Arrangement arrangement, CoilPair coils, ShieldingModel<?> model) {
         this.title = title;
         this.bodies = bodies;
@@ -90,6 +95,7 @@ public final class AxisymmetricDesign {
         this.sensor = sensor;
         this.applied = applied;
         this.tolerance = tolerance;
+        this.fineness = fineness;
         this.band = band;
         this.points = points;
         this.requirement = requirement;
@@ -102,9 +108,11 @@ public final class AxisymmetricDesign {
     private ShieldingModel<?> buildModel() {
         if (coils != null) {
             CoilCoupling c = arrangement.between(coils);
+            c = fineness == DEFAULT_FINENESS ? c : c.withFineness(fineness);
             return tolerance == null ? c : c.withTolerance(tolerance);
         }
         AxialFieldShielding s = arrangement.inUniformAxialField().sensing(sensor.region());
+        s = fineness == DEFAULT_FINENESS ? s : s.withFineness(fineness);
         return tolerance == null ? s : s.withTolerance(tolerance);
     }
 
@@ -147,7 +155,7 @@ public final class AxisymmetricDesign {
         List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
         return checked(new AxisymmetricDesign("", b, Require.nonNull("transmitter", transmitter),
                 Require.nonNull("receiver", receiver), Require.nonNull("separation", separation), null, null, null,
-                null, null,
+                null, null, DEFAULT_FINENESS,
                 Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
@@ -167,14 +175,14 @@ public final class AxisymmetricDesign {
                                                          FrequencyBand band, int points) {
         List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
         return checked(new AxisymmetricDesign("", b, null, null, null, null, null, Require.nonNull("sensor", sensor),
-                null, null,
+                null, null, DEFAULT_FINENESS,
                 Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
     private AxisymmetricDesign copy(String t, CurrentAmplitude dr, AmplitudeMeasure dm, MagneticFluxDensity ap,
                                     Decibels tol, Requirement req, Spelling sp) {
-        return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, ap, tol, band,
-                points, req, sp, arrangement, coils, Objects.equals(tol, tolerance) ? model : null);
+        return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, ap, tol, fineness,
+                band, points, req, sp, arrangement, coils, Objects.equals(tol, tolerance) ? model : null);
     }
 
     /**
@@ -212,6 +220,31 @@ public final class AxisymmetricDesign {
     public AxisymmetricDesign withTolerance(Decibels newTolerance) {
         Require.inRange("tolerance", Require.nonNull("tolerance", newTolerance).toDb(), 0.001, 10, "dB");
         return copy(title, drive, driveMeasure, applied, newTolerance, requirement, spelling);
+    }
+
+    /**
+     * A copy whose evaluation starts from a finer or coarser mesh (see
+     * {@link CoilCoupling#withFineness(double)}): a study that computed a design at another
+     * fineness writes it here, so that the file evaluates to the numbers the study printed.
+     *
+     * @param q the fineness, 0.25 to 16 ({@value #DEFAULT_FINENESS} by default)
+     * @return the new design; this one is unchanged
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if q is out of range
+     */
+    public AxisymmetricDesign withFineness(double q) {
+        Require.inRange("mesh fineness", q, 0.25, 16, "(plain number)");
+        return new AxisymmetricDesign(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor,
+                applied, tolerance, q, band, points, requirement, spelling, arrangement, coils,
+                q == fineness ? model : null);
+    }
+
+    /**
+     * The mesh fineness the evaluation starts from.
+     *
+     * @return q, {@value #DEFAULT_FINENESS} unless {@link #withFineness(double)} said otherwise
+     */
+    public double fineness() {
+        return fineness;
     }
 
     /**
@@ -409,14 +442,15 @@ public final class AxisymmetricDesign {
                 && Objects.equals(d.transmitter, transmitter) && Objects.equals(d.receiver, receiver)
                 && Objects.equals(d.separation, separation) && Objects.equals(d.drive, drive) && d.driveMeasure == driveMeasure
                 && Objects.equals(d.sensor, sensor) && Objects.equals(d.applied, applied)
-                && Objects.equals(d.tolerance, tolerance) && d.band.equals(band) && d.points == points
+                && Objects.equals(d.tolerance, tolerance) && Double.compare(d.fineness, fineness) == 0
+                && d.band.equals(band) && d.points == points
                 && d.requirement.equals(requirement) && d.spelling.equals(spelling);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor, applied, tolerance, band, points,
-                requirement, spelling);
+        return Objects.hash(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor, applied, tolerance, fineness, band,
+                points, requirement, spelling);
     }
 
     @Override
@@ -424,6 +458,7 @@ public final class AxisymmetricDesign {
         return (title.isEmpty() ? "axisymmetric design" : title) + ": " + bodies
                 + (coils != null ? " between " + coils : " in a uniform axial field, " + sensor) + ", " + band + ", "
                 + points + " points" + (tolerance == null ? "" : ", tolerance " + tolerance)
+                + (fineness == DEFAULT_FINENESS ? "" : ", fineness " + fineness)
                 + (requirement.entries().isEmpty() ? "" : ", " + requirement);
     }
 }

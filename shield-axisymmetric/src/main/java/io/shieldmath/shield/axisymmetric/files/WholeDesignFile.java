@@ -70,7 +70,8 @@ import tools.jackson.databind.node.ObjectNode;
  *     ],
  *     "appliedField": { "direction": "axial", "fluxDensity": "40 µT",
  *                       "sensor": { "radius": "5 mm", "length": "10 mm", "centre": "0 mm" } },
- *     "tolerance": "0.1 dB"                                       (optional)
+ *     "tolerance": "0.1 dB",                                      (optional)
+ *     "fineness": 0.5                                             (optional, default 1)
  *   },
  *   "band": "10 Hz to 1 kHz",
  *   "points": 5,
@@ -94,7 +95,9 @@ import tools.jackson.databind.node.ObjectNode;
  * </pre>
  * with the transmitter at z = −separation/2; measures are {@code peak}, {@code peak-to-peak}
  * and {@code rms}. The sensor is optional (a point at the centre) and is a point when it has
- * no radius and length. The band must lie within the geometry's quasi-static limit. A design
+ * no radius and length. {@code fineness} is the solver's starting mesh fineness (0.25 to 16,
+ * see {@code CoilCoupling.withFineness}), written only when it is not 1. The band must lie
+ * within the geometry's quasi-static limit. A design
  * read from a file is written back with each quantity in the text it was given in.
  *
  * <p>Documents are at most 4 000 000 characters. Stateless and thread-safe.
@@ -106,7 +109,8 @@ public final class WholeDesignFile {
 
     private static final Set<String> ROOT_FIELDS = Set.of("format", "version", "title", "arrangement", "band",
             "points", "cases");
-    private static final Set<String> ARRANGEMENT_FIELDS = Set.of("bodies", "coils", "appliedField", "tolerance");
+    private static final Set<String> ARRANGEMENT_FIELDS = Set.of("bodies", "coils", "appliedField", "tolerance",
+            "fineness");
     private static final Set<String> COMMON_BODY_FIELDS = Set.of("name", "shape", "material", "medium", "centre");
     private static final Set<String> COILS_FIELDS = Set.of("transmitter", "receiver", "separation", "drive");
     private static final Set<String> COIL_FIELDS = Set.of("radius", "turns", "winding");
@@ -272,6 +276,12 @@ public final class WholeDesignFile {
             Decibels tol = tolNode.quantity(Decibels::parse, "0.1 dB");
             AxisymmetricDesign before = d;
             d = at(tolNode, () -> before.withTolerance(tol));
+        }
+        Node finNode = af.optional("fineness");
+        if (finNode != null) {
+            double q = finNode.number();
+            AxisymmetricDesign before = d;
+            d = at(finNode, () -> before.withFineness(q));
         }
         Node casesNode = f.optional("cases");
         if (casesNode != null) {
@@ -506,6 +516,9 @@ public final class WholeDesignFile {
             }
         }
         d.tolerance().ifPresent(t -> a.put("tolerance", sp.text(t)));
+        if (d.fineness() != AxisymmetricDesign.DEFAULT_FINENESS) {
+            a.put("fineness", d.fineness());
+        }
         root.put("band", sp.text(d.band()));
         root.put("points", d.points());
         writeCases(root, d.requirement(), sp);
