@@ -179,6 +179,8 @@ public final class WholeDesignFile {
      *
      * @param design the design, not null
      * @return the document, pretty-printed
+     * @throws IllegalArgumentException if a permeability model is of a type the files do not hold (only
+     *         constant, relaxation and table models are written)
      */
     public static String toJson(WholeDesign design) {
         Require.nonNull("design", design);
@@ -193,6 +195,8 @@ public final class WholeDesignFile {
      *
      * @param design the design, not null
      * @return the document, pretty-printed
+     * @throws IllegalArgumentException if a permeability model is of a type the files do not hold (only
+     *         constant, relaxation and table models are written)
      */
     public static String toJson(AxisymmetricDesign design) {
         return writeAxisymmetric(Require.nonNull("design", design));
@@ -204,6 +208,7 @@ public final class WholeDesignFile {
      * @param design the design, not null
      * @param file   the file, not null
      * @throws IOException if the file cannot be written
+     * @throws IllegalArgumentException if a permeability model is of a type the files do not hold
      */
     public static void write(WholeDesign design, Path file) throws IOException {
         Files.writeString(Require.nonNull("file", file), toJson(design), StandardCharsets.UTF_8);
