@@ -484,7 +484,7 @@ public final class Node {
 
     /**
      * The quantities of this value's document read so far whose text differs from the form
-     * {@link QuantityText.defaultText(Object)} would write: from the JSON path to that default
+     * {@link QuantityText#defaultText(Object)} would write: from the JSON path to that default
      * text and the text as given, so that a design read from a file is written back in the
      * user's units.
      *

@@ -12,7 +12,7 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * The texts a design's quantities were given in, where they differ from the default written
- * form ({@link QuantityText.defaultText(Object)}): "0.2 mm" stays "0.2 mm" and "21 mil" stays
+ * form ({@link QuantityText#defaultText(Object)}): "0.2 mm" stays "0.2 mm" and "21 mil" stays
  * "21 mil" when a design read from a file is written again. Each text is kept with its JSON
  * path and the default text of its value; it is written back only at the same path and only
  * while the value there is still the same (its default text unchanged), so a text is never
@@ -46,7 +46,7 @@ public final class Spelling {
      * The default written form of a quantity; {@link #applyTo(ObjectNode)} puts the texts as
      * given back once the whole document is written.
      *
-     * @param quantity a quantity of a type {@link QuantityText.defaultText(Object)} knows, not null
+     * @param quantity a quantity of a type {@link QuantityText#defaultText(Object)} knows, not null
      * @return the text
      * @throws IllegalArgumentException if the type is not one files hold
      */
