@@ -8,7 +8,8 @@
 #   scripts/check-reproducible.sh          # from anywhere in the repository
 #   scripts/check-reproducible.sh -o       # extra Maven options, e.g. offline
 #
-# About 3 to 4 minutes on 2 cores; not part of ./mvnw -B verify nor of .ci/run.
+# About 3 to 4 minutes on 2 cores; not part of ./mvnw -B verify nor of .ci/run (there,
+# distribution/.../ReproducibleBuildIT rebuilds shield-core only and compares its jar).
 set -euo pipefail
 root="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$root"

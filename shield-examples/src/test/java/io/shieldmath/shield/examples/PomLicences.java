@@ -60,8 +60,13 @@ final class PomLicences {
      * and not the LGPL.
      */
     static boolean isGplFamily(Licence licence) {
-        String text = (licence.name() + " " + licence.url()).toLowerCase(Locale.ROOT);
-        return !LESSER.matcher(text).find() && GPL_FAMILY.matcher(text).find();
+        return !isLesserGpl(licence)
+                && GPL_FAMILY.matcher((licence.name() + " " + licence.url()).toLowerCase(Locale.ROOT)).find();
+    }
+
+    /** Whether a licence is the GNU Lesser (or Library) GPL, any version. */
+    static boolean isLesserGpl(Licence licence) {
+        return LESSER.matcher((licence.name() + " " + licence.url()).toLowerCase(Locale.ROOT)).find();
     }
 
     /**
