@@ -184,6 +184,10 @@ public final class Requirement {
         /**
          * Checks the entry.
          *
+         * @param band       the band, not null
+         * @param incident   the flux density without a shield, not null (empty for a direct entry)
+         * @param tolerated  the tolerated flux density, not null (empty for a direct entry)
+         * @param requiredDb the required SE, dB, finite
          * @throws NullPointerException     if an argument is null
          * @throws IllegalArgumentException if exactly one of incident and tolerated is present
          * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the required SE is not finite

@@ -14,6 +14,7 @@ import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.medium.Medium;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.planar.Barrier;
+import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.Decibels;
@@ -138,6 +139,9 @@ class RequiredSeTest {
                 IncidentField.magneticNearField(Length.ofCentimetres(20), ImpedanceForm.TEXTBOOK), direct,
                 MagneticFluxDensity.ofTesla(0.75), Length.ofCentimetres(10)));
         assertTrue(e.getMessage().contains("gives only a required SE"), e.getMessage());
+        TwoLayerAdvice.Question q = TwoLayerAdvice.of(Layer.of(COPPER, Length.ofMillimetres(1)),
+                Layer.of(COPPER, Length.ofMillimetres(1)));
+        assertThrows(IllegalArgumentException.class, () -> q.meeting(direct));
         assertEquals(List.of(), Requirement.none().entries());
     }
 }
