@@ -4,6 +4,7 @@
 package io.shieldmath.shield.design;
 
 import io.shieldmath.shield.model.ShieldingModel;
+import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
@@ -12,16 +13,20 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 /**
- * What a victim needs: for each frequency or band, the field the source makes at the
- * victim without a shield and the field the victim tolerates. The required shielding
- * effectiveness there is 20·log10(incident / tolerated).
+ * What a victim needs: for each frequency or band, either the field the source makes at the
+ * victim without a shield and the field the victim tolerates, from which the required
+ * shielding effectiveness is 20·log10(incident / tolerated), or the required shielding
+ * effectiveness itself. Shielding effectiveness is the ratio of the field without the
+ * shield to the field with it, in decibels (IEEE Std 299-2006, clause 3).
  *
  * <pre>{@code
  * Requirement need = Requirement.none()
  *     .plus(FrequencyBand.at(Hz(50)), uT(40), nT(10))
- *     .plus(FrequencyBand.at(kHz(20)), uT(3), nT(200));
+ *     .plus(FrequencyBand.at(kHz(20)), uT(3), nT(200))
+ *     .plus(FrequencyBand.parse("1 MHz to 10 MHz"), Decibels.of(60));
  * MarginReport m = need.marginOf(barrier.facing(field));
  * }</pre>
  *
@@ -29,6 +34,12 @@ import java.util.Locale;
  * {@code plus} returns a new requirement.
  */
 public final class Requirement {
+
+    /** The smallest required SE {@link #plus(FrequencyBand, Decibels)} accepts, dB. */
+    public static final double MIN_REQUIRED_DB = 0;
+
+    /** The largest required SE {@link #plus(FrequencyBand, Decibels)} accepts, dB. */
+    public static final double MAX_REQUIRED_DB = 400;
 
     private static final Requirement NONE = new Requirement(List.of());
 
@@ -62,8 +73,33 @@ public final class Requirement {
         double inc = Require.positive("incident flux density", Require.nonNull("incident", incident).toTesla(), "T");
         double tol = Require.positive("tolerated flux density", Require.nonNull("tolerated", tolerated).toTesla(),
                 "T");
+        return with(new Entry(band, Optional.of(incident), Optional.of(tolerated), 20 * Math.log10(inc / tol)));
+    }
+
+    /**
+     * This requirement with one more band, given directly as the shielding effectiveness
+     * the design must reach there. Such an entry has no incident or tolerated field
+     * ({@link Entry#incident()} and {@link Entry#tolerated()} are empty).
+     *
+     * @param band       the band (or single frequency), not null
+     * @param requiredSe the required SE, finite, from {@value #MIN_REQUIRED_DB} dB to
+     *                   {@value #MAX_REQUIRED_DB} dB (0 dB: the design must not make the
+     *                   field stronger)
+     * @return the new requirement
+     * @throws NullPointerException if an argument is null
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the required SE is outside
+     *         0 dB to 400 dB
+     */
+    public Requirement plus(FrequencyBand band, Decibels requiredSe) {
+        Require.nonNull("band", band);
+        double db = Require.inRange("required shielding effectiveness",
+                Require.nonNull("required SE", requiredSe).toDb(), MIN_REQUIRED_DB, MAX_REQUIRED_DB, "dB");
+        return with(new Entry(band, Optional.empty(), Optional.empty(), db + 0.0));
+    }
+
+    private Requirement with(Entry e) {
         List<Entry> l = new ArrayList<>(entries);
-        l.add(new Entry(band, incident, tolerated, 20 * Math.log10(inc / tol)));
+        l.add(e);
         return new Requirement(l);
     }
 
@@ -132,20 +168,74 @@ public final class Requirement {
     }
 
     /**
-     * One band of a requirement.
+     * One band of a requirement: either a source case (incident and tolerated flux densities
+     * both present, the required SE following from them) or a required SE given directly
+     * (both empty).
      *
      * @param band       the band
-     * @param incident   the flux density without a shield
-     * @param tolerated  the flux density the victim tolerates
-     * @param requiredDb the required SE, 20·log10(incident/tolerated), dB (negative: no shield needed)
+     * @param incident   the flux density without a shield; empty when the required SE was given directly
+     * @param tolerated  the flux density the victim tolerates; empty when the required SE was given directly
+     * @param requiredDb the required SE, dB: 20·log10(incident/tolerated) (negative: no shield
+     *                   needed), or the level given directly
      */
-    public record Entry(FrequencyBand band, MagneticFluxDensity incident, MagneticFluxDensity tolerated,
-                        double requiredDb) {
+    public record Entry(FrequencyBand band, Optional<MagneticFluxDensity> incident,
+                        Optional<MagneticFluxDensity> tolerated, double requiredDb) {
+
+        /**
+         * Checks the entry.
+         *
+         * @param band       the band, not null
+         * @param incident   the flux density without a shield, not null (empty for a direct entry)
+         * @param tolerated  the tolerated flux density, not null (empty for a direct entry)
+         * @param requiredDb the required SE, dB, finite
+         * @throws NullPointerException     if an argument is null
+         * @throws IllegalArgumentException if exactly one of incident and tolerated is present
+         * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the required SE is not finite
+         */
+        public Entry {
+            Require.nonNull("band", band);
+            Require.nonNull("incident", incident);
+            Require.nonNull("tolerated", tolerated);
+            Require.finite("required shielding effectiveness", requiredDb, "dB");
+            if (incident.isPresent() != tolerated.isPresent()) {
+                throw new IllegalArgumentException("an entry holds both the incident and the tolerated flux density"
+                        + " or neither (a required SE given directly)");
+            }
+        }
+
+        /**
+         * A source case: the required SE is 20·log10(incident/tolerated).
+         *
+         * @param band       the band
+         * @param incident   the flux density without a shield, not null
+         * @param tolerated  the flux density the victim tolerates, not null
+         * @param requiredDb the required SE, dB, finite
+         * @throws NullPointerException if an argument is null
+         * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the required SE is not finite
+         */
+        public Entry(FrequencyBand band, MagneticFluxDensity incident, MagneticFluxDensity tolerated,
+                     double requiredDb) {
+            this(band, Optional.of(Require.nonNull("incident", incident)),
+                    Optional.of(Require.nonNull("tolerated", tolerated)), requiredDb);
+        }
+
+        /**
+         * Whether the required SE was given directly rather than from an incident and a
+         * tolerated field.
+         *
+         * @return true if {@link #incident()} and {@link #tolerated()} are empty
+         */
+        public boolean isDirect() {
+            return incident.isEmpty();
+        }
 
         @Override
         public String toString() {
-            return String.format(Locale.ROOT, "%s: %s incident, %s tolerated, %.1f dB required", band, incident,
-                    tolerated, requiredDb);
+            if (isDirect()) {
+                return String.format(Locale.ROOT, "%s: %.1f dB required", band, requiredDb);
+            }
+            return String.format(Locale.ROOT, "%s: %s incident, %s tolerated, %.1f dB required", band,
+                    incident.get(), tolerated.get(), requiredDb);
         }
     }
 }

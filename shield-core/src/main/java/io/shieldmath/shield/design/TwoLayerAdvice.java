@@ -98,14 +98,18 @@ public final class TwoLayerAdvice {
         }
 
         /**
-         * The requirement both orders are measured against.
+         * The requirement both orders are measured against. Every entry must give the
+         * incident flux density (the wall flux estimate needs it), so none may be a
+         * required SE given directly.
          *
-         * @param need the requirement, not null, not empty
+         * @param need the requirement, not null, not empty, no entry given as a required SE alone
          * @return the question with this requirement
-         * @throws NullPointerException if the requirement is null
+         * @throws NullPointerException     if the requirement is null
+         * @throws IllegalArgumentException if an entry gives only a required SE
          */
         public Question meeting(Requirement need) {
-            return new Question(conductor, magnetic, field, Require.nonNull("requirement", need), saturation);
+            return new Question(conductor, magnetic, field, withIncident(Require.nonNull("requirement", need)),
+                    saturation);
         }
 
         /**
@@ -137,6 +141,16 @@ public final class TwoLayerAdvice {
         }
     }
 
+    private static Requirement withIncident(Requirement need) {
+        for (Requirement.Entry e : need.entries()) {
+            if (e.isDirect()) {
+                throw new IllegalArgumentException("the two-layer advice needs the incident flux density of every"
+                        + " band for its wall flux estimate; the entry \"" + e + "\" gives only a required SE");
+            }
+        }
+        return need;
+    }
+
     /**
      * Compares the two orders.
      *
@@ -166,8 +180,8 @@ public final class TwoLayerAdvice {
         double t = magneticThickness.toMetres();
         double peakBehind = 0;
         double peakFacing = 0;
-        for (Requirement.Entry e : requirement.entries()) {
-            double b0 = e.incident().toTesla();
+        for (Requirement.Entry e : withIncident(requirement).entries()) {
+            double b0 = e.incident().orElseThrow().toTesla();
             double fLow = e.band().low().toHertz();
             double sc = Math.pow(10, conductorAlone.shieldingEffectivenessDb(fLow) / 20);
             // B_wall ≈ µ0·H·D/t = B·D/t for the field B reaching the layer.

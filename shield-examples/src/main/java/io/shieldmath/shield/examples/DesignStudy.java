@@ -303,9 +303,10 @@ public final class DesignStudy {
         if (best != null && best.candidate().evaluation() instanceof AxialFieldShielding can) {
             Margin w = best.worst();
             Frequency at = Frequency.ofHertz(w.hertz());
-            FieldMapPicture canMap = FieldMapPicture.around(best.candidate().arrangement(), can.at(at),
-                            w.entry().incident())
-                    .titled("Recommended " + best.candidate().label() + ", in " + w.entry().incident() + " along its axis at "
+            // The study's own requirement is made of source cases, so each entry has its incident field.
+            MagneticFluxDensity incident = w.entry().incident().orElseThrow();
+            FieldMapPicture canMap = FieldMapPicture.around(best.candidate().arrangement(), can.at(at), incident)
+                    .titled("Recommended " + best.candidate().label() + ", in " + incident + " along its axis at "
                             + at + " (illustrative)");
             canMap.writePng(folder.resolve("field-map-can.png"), MAP_WIDTH, MAP_HEIGHT);
             canMap.writeSvg(folder.resolve("field-map-can.svg"), MAP_WIDTH, MAP_HEIGHT);
@@ -526,8 +527,9 @@ public final class DesignStudy {
         out.println(String.format(Locale.ROOT, "  %-22s %12s %12s %10s", "band", "incident", "tolerated",
                 "required"));
         for (Requirement.Entry e : need.entries()) {
-            out.println(String.format(Locale.ROOT, "  %-22s %12s %12s %7.1f dB", e.band(), e.incident(),
-                    e.tolerated(), e.requiredDb()));
+            out.println(String.format(Locale.ROOT, "  %-22s %12s %12s %7.1f dB", e.band(),
+                    e.incident().map(Object::toString).orElse("-"), e.tolerated().map(Object::toString).orElse("-"),
+                    e.requiredDb()));
         }
         out.println();
     }
@@ -586,8 +588,8 @@ public final class DesignStudy {
         }
         MagneticFluxDensity strongest = MagneticFluxDensity.ofTesla(0);
         for (Requirement.Entry e : need.entries()) {
-            if (e.incident().compareTo(strongest) > 0) {
-                strongest = e.incident();
+            if (e.incident().isPresent() && e.incident().get().compareTo(strongest) > 0) {
+                strongest = e.incident().get();
             }
         }
         Body can = best.candidate().arrangement().bodies().get(0);

@@ -201,7 +201,7 @@ public final class AxisymmetricDesign {
     /**
      * A copy with the source cases the design must meet.
      *
-     * @param newRequirement the bands, incident and tolerated flux densities, not null
+     * @param newRequirement the bands with incident and tolerated flux densities or required SEs, not null
      * @return the new design; this one is unchanged
      */
     public AxisymmetricDesign meeting(Requirement newRequirement) {

@@ -75,9 +75,12 @@ import tools.jackson.databind.node.ObjectNode;
  *   },
  *   "band": "10 Hz to 1 kHz",
  *   "points": 5,
- *   "cases": [ { "band": "49 Hz to 51 Hz", "incident": "40 µT", "tolerated": "100 nT" } ]
+ *   "cases": [ { "band": "49 Hz to 51 Hz", "incident": "40 µT", "tolerated": "100 nT" },
+ *              { "band": "200 Hz to 400 Hz", "requiredSe": "20 dB" } ]    (requiredSe: SE given directly)
  * }
  * </pre>
+ * A source case holds either {@code incident} and {@code tolerated} or {@code requiredSe}
+ * (0 dB to 400 dB), never both.
  * Shapes and their lengths: {@code disc} (radius, thickness), {@code annular-plate}
  * (outerRadius, holeRadius, thickness), {@code cap} (radius, thickness, optional hole),
  * {@code tube} (innerRadius, wall, length), {@code can} (innerRadius, wall, length, lowerEnd

@@ -19,6 +19,7 @@ import io.shieldmath.shield.medium.PermeabilityModel;
 import io.shieldmath.shield.quantity.Conductivity;
 import io.shieldmath.shield.quantity.CurrentAmplitude;
 import io.shieldmath.shield.quantity.Decibels;
+import io.shieldmath.shield.quantity.Decibels;
 import io.shieldmath.shield.quantity.FrequencyBand;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
@@ -130,9 +131,20 @@ final class RandomWholeDesigns {
         for (int i = 0; i < n; i++) {
             ObjectNode c = cases.addObject();
             String b = band(logUniform(1, 1e4), 0);
+            c.put("band", b);
+            if (r.nextBoolean()) {
+                // A required SE given directly, 0 dB to 400 dB (rounding 399.x up gives 400 at most).
+                String se = noted(switch (r.nextInt(6)) {
+                    case 0 -> "0 dB";
+                    case 1 -> "400 dB";
+                    default -> number(400 * r.nextDouble(), 0) + " dB";
+                });
+                c.put("requiredSe", se);
+                q = q.plus(FrequencyBand.parse(b), Decibels.parse(se));
+                continue;
+            }
             String in = fluxDensity(logUniform(1e-7, 1e-3));
             String tol = fluxDensity(logUniform(1e-10, 1e-6));
-            c.put("band", b);
             c.put("incident", in);
             c.put("tolerated", tol);
             q = q.plus(FrequencyBand.parse(b), MagneticFluxDensity.parse(in), MagneticFluxDensity.parse(tol));

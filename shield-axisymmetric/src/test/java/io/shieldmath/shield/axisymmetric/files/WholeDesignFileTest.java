@@ -4,6 +4,7 @@
 package io.shieldmath.shield.axisymmetric.files;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -267,6 +268,44 @@ class WholeDesignFileTest {
         MaterialFileException e = assertThrows(MaterialFileException.class, () -> DesignFile.parse(CAN, CAT));
         assertEquals("$.arrangement", e.path());
         assertTrue(e.getMessage().contains("WholeDesignFile"), e.getMessage());
+    }
+
+    @Test
+    void aRequiredSeGivenDirectlyReadsWritesBackAsGivenAndMatchesItsFieldPair() {
+        String direct = CAN.replace("\"incident\": \"40 µT\", \"tolerated\": \"100 nT\"",
+                "\"requiredSe\": \"52.04 dB\"");
+        WholeDesign d = WholeDesignFile.parse(direct, CAT);
+        Requirement.Entry e = d.requirement().entries().get(0);
+        assertTrue(e.isDirect());
+        assertEquals(52.04, e.requiredDb(), 0);
+        String back = WholeDesignFile.toJson(d);
+        assertTrue(back.contains("\"requiredSe\" : \"52.04 dB\""), back);
+        assertFalse(back.contains("incident"), back);
+        assertEquals(d, WholeDesignFile.parse(back, CAT));
+        assertEquals(back, WholeDesignFile.toJson(WholeDesignFile.parse(back, CAT)));
+        // 40 µT to 100 nT needs 20·log10(400) = 52.0412 dB (IEEE Std 299-2006, clause 3: SE as a
+        // field ratio in dB); the direct 52.04 dB case has a margin larger by 0.0012 dB (hand value).
+        WholeDesign byFields = WholeDesignFile.parse(CAN, CAT);
+        assertEquals(20 * Math.log10(400) - 52.04, byFields.requirement().entries().get(0).requiredDb()
+                - e.requiredDb(), 1e-12);
+        assertEquals(0.0012, byFields.requirement().entries().get(0).requiredDb() - e.requiredDb(), 1e-4);
+    }
+
+    @Test
+    void sourceCaseProblemsAreLocatedAtTheCase() {
+        String pair = "\"incident\": \"40 µT\", \"tolerated\": \"100 nT\"";
+        MaterialFileException both = refused(CAN.replace(pair, pair + ", \"requiredSe\": \"40 dB\""));
+        assertEquals("$.cases[0]", both.path());
+        assertEquals(20, both.line()); // the line of "cases" in CAN (counted by hand)
+        assertTrue(both.problem().contains("not both"), both.problem());
+        MaterialFileException neither = refused(CAN.replace(", " + pair, ""));
+        assertEquals("$.cases[0]", neither.path());
+        assertEquals(20, neither.line());
+        MaterialFileException range = refused(CAN.replace(pair, "\"requiredSe\": \"-1 dB\""));
+        assertEquals("$.cases[0].requiredSe", range.path());
+        assertTrue(range.problem().contains("from 0 dB to 400 dB"), range.problem());
+        MaterialFileException unit = refused(CAN.replace(pair, "\"requiredSe\": \"40\""));
+        assertEquals("$.cases[0].requiredSe", unit.path());
     }
 
     @Test

@@ -140,7 +140,7 @@ public final class Design {
     /**
      * A copy with the source cases the design must meet.
      *
-     * @param newRequirement the bands, incident flux densities and tolerated flux densities, not null
+     * @param newRequirement the bands with incident and tolerated flux densities or required SEs, not null
      * @return the new design; this one is unchanged
      */
     public Design meeting(Requirement newRequirement) {

@@ -158,7 +158,8 @@ public final class DesignFile {
      *   "band": "10 Hz to 100 kHz",
      *   "points": 41,
      *   "cases": [                                         (optional: every source case to meet)
-     *     { "band": "19 kHz to 21 kHz", "incident": "8 µT", "tolerated": "5 nT" }
+     *     { "band": "19 kHz to 21 kHz", "incident": "8 µT", "tolerated": "5 nT" },
+     *     { "band": "1 MHz to 10 MHz", "requiredSe": "40 dB" }  (a required SE given directly)
      *   ]
      * }
      * </pre>
@@ -174,6 +175,8 @@ public final class DesignFile {
      * Opening kinds: {@code holes} (diameter, count), {@code slot} (length, width),
      * {@code seam} (length), each with optional {@code tubeDepth}, {@code victimDistance} and
      * {@code name}. Version 1 files (a planar stack, no shell or cases) are still read.
+     * A source case holds either {@code incident} and {@code tolerated} or {@code requiredSe}
+     * (0 dB to 400 dB), never both.
      *
      * Field kinds: {@code plane-wave} (no distance or impedance), {@code magnetic-near-field},
      * {@code electric-near-field}; impedance forms {@code textbook}, {@code exact-dipole}. A

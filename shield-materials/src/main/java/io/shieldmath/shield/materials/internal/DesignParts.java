@@ -71,7 +71,7 @@ public final class DesignParts {
     }
 
     private static final Set<String> MEDIUM_FIELDS = Set.of("name", "conductivity", "permeability", "permittivity");
-    private static final Set<String> CASE_FIELDS = Set.of("band", "incident", "tolerated");
+    private static final Set<String> CASE_FIELDS = Set.of("band", "incident", "tolerated", "requiredSe");
 
     /**
      * An inline medium: name, conductivity, optional permeability model and permittivity.
@@ -112,8 +112,9 @@ public final class DesignParts {
     }
 
     /**
-     * The source cases: each a band, the flux density at the victim without a shield and the
-     * flux density it tolerates.
+     * The source cases: each a band and either the flux density at the victim without a
+     * shield and the flux density it tolerates ({@code "incident"} and {@code "tolerated"}),
+     * or the required shielding effectiveness itself ({@code "requiredSe"}), never both.
      *
      * @param n the array
      * @return the requirement
@@ -125,10 +126,25 @@ public final class DesignParts {
             Node.Fields f = c.object(CASE_FIELDS);
             Node bn = f.required("band");
             FrequencyBand b = bn.quantity(FrequencyBand::parse, "19 kHz to 21 kHz");
-            MagneticFluxDensity in = f.required("incident").quantity(MagneticFluxDensity::parse, "8 µT");
-            MagneticFluxDensity tol = f.required("tolerated").quantity(MagneticFluxDensity::parse, "5 nT");
+            Node seNode = f.optional("requiredSe");
+            Node inNode = f.optional("incident");
+            Node tolNode = f.optional("tolerated");
             Requirement before = r;
-            r = at(c, () -> before.plus(b, in, tol));
+            if (seNode != null) {
+                if (inNode != null || tolNode != null) {
+                    throw c.error("a source case gives either \"requiredSe\" or \"incident\" and \"tolerated\","
+                            + " not both");
+                }
+                Decibels se = seNode.quantity(Decibels::parse, "40 dB");
+                r = at(seNode, () -> before.plus(b, se));
+            } else {
+                if (inNode == null && tolNode == null) {
+                    throw c.error("a source case needs \"incident\" and \"tolerated\", or \"requiredSe\"");
+                }
+                MagneticFluxDensity in = f.required("incident").quantity(MagneticFluxDensity::parse, "8 µT");
+                MagneticFluxDensity tol = f.required("tolerated").quantity(MagneticFluxDensity::parse, "5 nT");
+                r = at(c, () -> before.plus(b, in, tol));
+            }
         }
         return r;
     }
@@ -148,8 +164,12 @@ public final class DesignParts {
         for (Requirement.Entry e : requirement.entries()) {
             ObjectNode c = cases.addObject();
             c.put("band", spelling.text(e.band()));
-            c.put("incident", spelling.text(e.incident()));
-            c.put("tolerated", spelling.text(e.tolerated()));
+            if (e.isDirect()) {
+                c.put("requiredSe", spelling.text(Decibels.of(e.requiredDb())));
+            } else {
+                c.put("incident", spelling.text(e.incident().orElseThrow()));
+                c.put("tolerated", spelling.text(e.tolerated().orElseThrow()));
+            }
         }
     }
 }

@@ -280,15 +280,28 @@ final class RandomMaterials {
         return s.inUniformField(r.nextBoolean());
     }
 
-    /** Random source cases: bands with incident and tolerated flux densities. */
+    /**
+     * Random source cases: bands with incident and tolerated flux densities, or with a
+     * required SE given directly (0 dB to 400 dB, the ends included now and then).
+     */
     static io.shieldmath.shield.design.Requirement cases(Random r) {
         io.shieldmath.shield.design.Requirement q = io.shieldmath.shield.design.Requirement.none();
         for (int i = 1 + r.nextInt(5); i > 0; i--) {
             double lo = logUniform(r, 1, 1e6);
             FrequencyBand b = r.nextBoolean() ? FrequencyBand.at(Frequency.ofHertz(lo))
                     : FrequencyBand.of(Frequency.ofHertz(lo), Frequency.ofHertz(lo * logUniform(r, 1, 10)));
-            q = q.plus(b, MagneticFluxDensity.ofTesla(logUniform(r, 1e-9, 1e-2)),
-                    MagneticFluxDensity.ofTesla(logUniform(r, 1e-12, 1e-6)));
+            if (r.nextBoolean()) {
+                double db = switch (r.nextInt(8)) {
+                    case 0 -> 0;
+                    case 1 -> 400;
+                    case 2 -> r.nextInt(121);
+                    default -> 400 * r.nextDouble();
+                };
+                q = q.plus(b, io.shieldmath.shield.quantity.Decibels.of(db));
+            } else {
+                q = q.plus(b, MagneticFluxDensity.ofTesla(logUniform(r, 1e-9, 1e-2)),
+                        MagneticFluxDensity.ofTesla(logUniform(r, 1e-12, 1e-6)));
+            }
         }
         return q;
     }
