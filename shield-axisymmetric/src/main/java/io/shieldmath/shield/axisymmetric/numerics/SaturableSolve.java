@@ -21,9 +21,13 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * {@link BandedLdlt} applies without pivoting (the argument of {@link HarmonicSolve}). This
  * is the Newton–Raphson method of P. Silvester and M. V. K. Chari, "Finite element
  * solution of saturable magnetic field problems", IEEE Trans. PAS 89 (1970) 1642–1651,
- * written for the axisymmetric A_φ form. Departures: the step is damped by a backtracking
- * line search on the energy (Armijo's condition, Nocedal &amp; Wright, <i>Numerical
- * Optimization</i>, 2006, §3.1), which with a convex energy makes the iteration converge
+ * written for the axisymmetric A_φ form. Departures: the step length is chosen by a line
+ * search on the energy: where the full step misses the minimum along the Newton direction by
+ * more than the strong Wolfe curvature condition allows (|Π'(λ)| ≤ 0.07·|Π'(0)|), the step is
+ * lengthened or shortened to that minimum (on the steep top of a curve the full step falls
+ * short, since the tangent reluctivity there is the largest on the way), then checked by
+ * backtracking under Armijo's condition (Nocedal &amp; Wright, <i>Numerical Optimization</i>,
+ * 2006, §3.1); with a convex energy this makes the iteration converge
  * from any start, here A = 0 inside (whose first Newton step is exactly the linear solve
  * with the curves' initial permeabilities); the energy change of the linear elements is
  * computed from its exact quadratic form, not as a difference of two large totals, so that
@@ -52,6 +56,10 @@ public final class SaturableSolve {
     private static final double G = 1 / Math.sqrt(3);
     /** The smallest relaxation factor of the fixed point. */
     private static final double MIN_RELAXATION = 1.0 / 16;
+    /** The line search's curvature factor: a step is exact enough once |Π'(λ)| ≤ this·|Π'(0)|. */
+    private static final double CURVATURE = 0.07;
+    /** The longest step along a Newton direction the line search tries, in Newton steps. */
+    private static final double MAX_STRETCH = 16;
 
     private final Mesh mesh;
     private final MagnetizationCurve[] curves;
@@ -370,7 +378,8 @@ public final class SaturableSolve {
     }
 
     /**
-     * The Armijo backtracking step on the energy: the largest λ = 2^−k with
+     * The step length: the minimum along δ when the full step misses it (see the class
+     * comment), then Armijo backtracking from there: the largest λ·2^−k with
      * Π(x + λδ) − Π(x) ≤ 1e−4·λ·∇Π·δ. The change of the linear part is its exact quadratic
      * λ·gᵀδ + ½λ²·δᵀKδ; only the saturable elements are re-evaluated per trial. A step that
      * is already tiny (below 1e−7 of the solution) is taken whole: there the test is at the
@@ -418,41 +427,104 @@ public final class SaturableSolve {
             }
         }
         double lambda = 1;
-        for (int trial = 0; trial < 40; trial++) {
-            double change = lambda * lin1 + 0.5 * lambda * lambda * lin2;
-            for (int c = 0; c < nl.length; c++) {
-                int el = nl[c];
-                int i = el % nr1;
-                int j = el / nr1;
-                MagnetizationCurve curve = curves[mesh.elementMaterial[el]];
-                gather(i, j, x, b0, g, a);
-                for (int q = 0; q < 4; q++) {
-                    d[q] = g[q] >= 0 ? delta[g[q]] : 0;
+        double d1 = slopeAt(1, x, delta, b0, lin1, lin2, g, a, d);
+        if (Math.abs(d1) > -slope0 * CURVATURE) {
+            // The full step misses the minimum along δ (short of it where the curve steepens
+            // ahead, past it where it flattens): the minimiser of the convex Π(x + λδ), the root
+            // of its increasing derivative, bracketed by doubling λ and found by the Illinois
+            // variant of regula falsi (G. Dahlquist and Å. Björck, Numerical Methods, 1974,
+            // §6.2.2) to |Π'(λ)| ≤ CURVATURE·|Π'(0)|, the strong Wolfe condition (Nocedal &amp;
+            // Wright §3.1).
+            double lo = 0;
+            double flo = slope0;
+            double hi = 1;
+            double fhi = d1;
+            while (fhi < 0 && hi < MAX_STRETCH) {
+                lo = hi;
+                flo = fhi;
+                hi *= 2;
+                fhi = slopeAt(hi, x, delta, b0, lin1, lin2, g, a, d);
+            }
+            lambda = hi;
+            int side = 0;
+            for (int it = 0; it < 60 && fhi > 0 && Math.abs(fhi) > -slope0 * CURVATURE; it++) {
+                lambda = (lo * fhi - hi * flo) / (fhi - flo);
+                if (!(lambda > lo && lambda < hi)) {
+                    lambda = 0.5 * (lo + hi);
                 }
-                for (int gp4 = 0; gp4 < 4; gp4++) {
-                    int o = 16 * c + 4 * gp4;
-                    double u0 = 0;
-                    double v0 = 0;
-                    double du = 0;
-                    double dv = 0;
-                    for (int q = 0; q < 4; q++) {
-                        u0 += gz[o + q] * a[q];
-                        v0 += gr[o + q] * a[q];
-                        du += gz[o + q] * d[q];
-                        dv += gr[o + q] * d[q];
+                double f = slopeAt(lambda, x, delta, b0, lin1, lin2, g, a, d);
+                if (Math.abs(f) <= -slope0 * CURVATURE) {
+                    break;
+                }
+                if (f < 0) {
+                    lo = lambda;
+                    flo = f;
+                    if (side == -1) {
+                        fhi *= 0.5;
                     }
-                    double u1 = u0 + lambda * du;
-                    double v1 = v0 + lambda * dv;
-                    change += wq[4 * c + gp4] * (curve.energyDensity(Math.sqrt(u1 * u1 + v1 * v1))
-                            - curve.energyDensity(Math.sqrt(u0 * u0 + v0 * v0)));
+                    side = -1;
+                } else {
+                    hi = lambda;
+                    fhi = f;
+                    if (side == 1) {
+                        flo *= 0.5;
+                    }
+                    side = 1;
                 }
             }
+        }
+        for (int trial = 0; trial < 40; trial++) {
+            double change = lambda * lin1 + 0.5 * lambda * lambda * lin2
+                    + alongStep(lambda, false, x, delta, b0, g, a, d);
             if (change <= 1e-4 * lambda * slope0) {
                 return lambda;
             }
             lambda *= 0.5;
         }
         return lambda;
+    }
+
+    /** The derivative of the energy along the step, dΠ(x + λδ)/dλ (lin1 + λ·lin2 its linear part's). */
+    private double slopeAt(double lambda, double[] x, double[] delta, double b0, double lin1, double lin2, int[] g,
+                           double[] a, double[] d) {
+        return lin1 + lambda * lin2 + alongStep(lambda, true, x, delta, b0, g, a, d);
+    }
+
+    /**
+     * The saturable elements' part along the step x + λδ: their energy change
+     * Σ w·(W(|B(λ)|) − W(|B(0)|)), or with derivative set its derivative Σ w·ν(|B(λ)|)·(B(λ)·δB).
+     */
+    private double alongStep(double lambda, boolean derivative, double[] x, double[] delta, double b0, int[] g,
+                             double[] a, double[] d) {
+        int nr1 = mesh.nr - 1;
+        double sum = 0;
+        for (int c = 0; c < nl.length; c++) {
+            int el = nl[c];
+            MagnetizationCurve curve = curves[mesh.elementMaterial[el]];
+            gather(el % nr1, el / nr1, x, b0, g, a);
+            for (int q = 0; q < 4; q++) {
+                d[q] = g[q] >= 0 ? delta[g[q]] : 0;
+            }
+            for (int gp4 = 0; gp4 < 4; gp4++) {
+                int o = 16 * c + 4 * gp4;
+                double u0 = 0;
+                double v0 = 0;
+                double du = 0;
+                double dv = 0;
+                for (int q = 0; q < 4; q++) {
+                    u0 += gz[o + q] * a[q];
+                    v0 += gr[o + q] * a[q];
+                    du += gz[o + q] * d[q];
+                    dv += gr[o + q] * d[q];
+                }
+                double u1 = u0 + lambda * du;
+                double v1 = v0 + lambda * dv;
+                double b1 = Math.sqrt(u1 * u1 + v1 * v1);
+                sum += wq[4 * c + gp4] * (derivative ? curve.reluctivity(b1) * (u1 * du + v1 * dv)
+                        : curve.energyDensity(b1) - curve.energyDensity(Math.sqrt(u0 * u0 + v0 * v0)));
+            }
+        }
+        return sum;
     }
 
     /** Peak |B|, volume and volume above the threshold per saturable material (x real, xi imaginary or null). */
