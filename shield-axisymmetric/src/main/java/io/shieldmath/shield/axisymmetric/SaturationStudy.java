@@ -203,7 +203,10 @@ public final class SaturationStudy {
         double b0 = appliedTesla(applied);
         requireCurve();
         String what = evaluation + ", saturable, in " + applied + (hz > 0 ? " at " + hz + " Hz" : " (static)");
-        Refinement.Outcome<SaturableSolve.Outcome> o = Refinement.run(q -> stage(hz, b0, q, what),
+        // Each static stage starts Newton from the previous (coarser) stage's solution.
+        SaturableSolve.Outcome[] previous = new SaturableSolve.Outcome[1];
+        Refinement.Outcome<SaturableSolve.Outcome> o = Refinement.run(q -> previous[0] = stage(hz, b0, q, what,
+                        previous[0]),
                 r -> AxialFieldSolution.worstDb(r.field(), evaluation.sensor(), what),
                 (x, y) -> Math.abs(AxialFieldSolution.worstDb(x.field(), evaluation.sensor(), what)
                         - AxialFieldSolution.worstDb(y.field(), evaluation.sensor(), what)),
@@ -211,12 +214,13 @@ public final class SaturationStudy {
         return new SaturationSolution(this, applied, hz, o.fine(), o.coarse(), what);
     }
 
-    private SaturableSolve.Outcome stage(double hz, double b0, double q, String what) {
+    private SaturableSolve.Outcome stage(double hz, double b0, double q, String what, SaturableSolve.Outcome start) {
         Mesh mesh = scene.mesh(new double[] {hz}, q, CoilCoupling.DEFAULT_FAR_BOUNDARY, true,
                 CoilCoupling.DEFAULT_MAX_UNKNOWNS, what);
         SaturableSolve solver = new SaturableSolve(mesh, curves);
         SaturableSolve.Outcome r = hz == 0
-                ? solver.magnetostatic(b0, NEWTON_TOLERANCE, MAX_NEWTON_STEPS, THRESHOLD)
+                ? solver.magnetostatic(b0, NEWTON_TOLERANCE, MAX_NEWTON_STEPS, THRESHOLD,
+                        start == null ? null : start.field())
                 : solver.harmonic(hz, b0, FIXED_POINT_TOLERANCE, MAX_FIXED_POINT_STEPS, THRESHOLD);
         if (!r.converged()) {
             double[] h = r.history();

@@ -224,24 +224,10 @@ public final class HarmonicSolve {
     }
 
     private Field solve(double[] fr, double[] fi, double boundaryScale) {
-        int n = mesh.n;
-        int b = mesh.band;
-        double[] xr = fr.clone();
-        double[] xi = fi.clone();
-        substitute(xr, xi);
-        double[] rr = new double[n];
-        double[] ri = new double[n];
-        double fNorm = norm(fr, fi);
-        double before = residual(fr, fi, xr, xi, rr, ri) / fNorm;
-        // One step of iterative refinement in working precision (Higham, Accuracy and Stability
-        // of Numerical Algorithms, 2002, §12.2): it repairs the effect of growth in the factors.
-        substitute(rr, ri);
-        for (int k = 0; k < n; k++) {
-            xr[k] += rr[k];
-            xi[k] += ri[k];
-        }
-        double after = residual(fr, fi, xr, xi, rr, ri) / fNorm;
-        return new Field(this, xr, xi, boundaryScale, before, after);
+        double[] xr = new double[mesh.n];
+        double[] xi = new double[mesh.n];
+        double[] r = RefinedSolve.run(fr, fi, xr, xi, this::substitute, this::residual);
+        return new Field(this, xr, xi, boundaryScale, r[0], r[1]);
     }
 
     private void substitute(double[] xr, double[] xi) {
@@ -286,14 +272,6 @@ public final class HarmonicSolve {
                 }
             }
         }
-        return norm(rr, ri);
-    }
-
-    private static double norm(double[] a, double[] b) {
-        double s = 0;
-        for (int k = 0; k < a.length; k++) {
-            s += a[k] * a[k] + b[k] * b[k];
-        }
-        return Math.sqrt(s);
+        return RefinedSolve.norm(rr, ri);
     }
 }

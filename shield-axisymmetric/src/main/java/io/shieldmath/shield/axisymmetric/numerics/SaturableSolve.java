@@ -28,8 +28,9 @@ import io.shieldmath.shield.quantity.PhysicalConstants;
  * short, since the tangent reluctivity there is the largest on the way), then checked by
  * backtracking under Armijo's condition (Nocedal &amp; Wright, <i>Numerical Optimization</i>,
  * 2006, §3.1); with a convex energy this makes the iteration converge
- * from any start, here A = 0 inside (whose first Newton step is exactly the linear solve
- * with the curves' initial permeabilities); the energy change of the linear elements is
+ * from any start: A = 0 inside (whose first Newton step is exactly the linear solve with the
+ * curves' initial permeabilities), or the solution on a coarser mesh interpolated to this one
+ * (what a refinement pair uses for its fine mesh: fewer steps, the same minimum); the energy change of the linear elements is
  * computed from its exact quadratic form, not as a difference of two large totals, so that
  * the test is not lost in rounding. The iteration stops when the largest nodal update is
  * below the tolerance relative to the largest nodal value; it converges quadratically near
@@ -215,6 +216,24 @@ public final class SaturableSolve {
      * @return the outcome
      */
     public Outcome magnetostatic(double b0, double tolerance, int maxSteps, double threshold) {
+        return magnetostatic(b0, tolerance, maxSteps, threshold, null);
+    }
+
+    /**
+     * The static nonlinear solve by damped Newton iteration from a given start: the potential
+     * of an earlier solve at the same applied field (normally on the coarser mesh of a
+     * refinement pair), interpolated to this mesh's nodes. Newton's method needs fewer steps
+     * from a start near the solution; the energy it minimises, and so the converged answer,
+     * do not depend on the start (the energy is strictly convex on the unknowns).
+     *
+     * @param b0        the applied flux density in T, greater than 0
+     * @param tolerance the largest relative nodal update accepted as converged
+     * @param maxSteps  the most Newton steps
+     * @param threshold the fraction of each curve's saturation flux density counted by {@link Outcome#fractionAbove}
+     * @param start     an earlier solution per unit B0 (any mesh of the same box), or null to start from A = 0
+     * @return the outcome
+     */
+    public Outcome magnetostatic(double b0, double tolerance, int maxSteps, double threshold, Field start) {
         int n = mesh.n;
         int b = mesh.band;
         int w = b + 1;
@@ -225,6 +244,18 @@ public final class SaturableSolve {
             nuLin[m] = m == 0 ? nu0 : nu0 / mesh.layout.mu[m].real(0);
         }
         double[] x = new double[n];
+        if (start != null) {
+            double[] out = new double[6];
+            for (int j = 1; j < mesh.nz - 1; j++) {
+                for (int i = 1; i < mesh.nr - 1; i++) {
+                    int k = mesh.unknown(i, j);
+                    if (k >= 0) {
+                        start.evaluate(mesh.rl[i], mesh.zl[j], out);
+                        x[k] = b0 * out[0];
+                    }
+                }
+            }
+        }
         double[] grad = new double[n];
         double[] band = new double[n * w];
         double[] delta = new double[n];

@@ -203,23 +203,10 @@ public final class TransverseSolve {
                 }
             }
         }
-        int n = mesh.n;
-        double[] xr = fr.clone();
-        double[] xi = fi.clone();
-        substitute(xr, xi);
-        double[] rr = new double[n];
-        double[] ri = new double[n];
-        double fNorm = Math.sqrt(dot(fr, fr) + dot(fi, fi));
-        double before = residual(fr, fi, xr, xi, rr, ri) / fNorm;
-        // One step of iterative refinement in working precision (N. J. Higham, Accuracy and
-        // Stability of Numerical Algorithms, 2002, §12.2), as in the axial solve.
-        substitute(rr, ri);
-        for (int k = 0; k < n; k++) {
-            xr[k] += rr[k];
-            xi[k] += ri[k];
-        }
-        double after = residual(fr, fi, xr, xi, rr, ri) / fNorm;
-        return new ScalarTransverseField(this, xr, xi, before, after);
+        double[] xr = new double[mesh.n];
+        double[] xi = new double[mesh.n];
+        double[] r = RefinedSolve.run(fr, fi, xr, xi, this::substitute, this::residual);
+        return new ScalarTransverseField(this, xr, xi, r[0], r[1]);
     }
 
     private void substitute(double[] xr, double[] xi) {
@@ -261,14 +248,6 @@ public final class TransverseSolve {
                 }
             }
         }
-        return Math.sqrt(dot(rr, rr) + dot(ri, ri));
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int k = 0; k < a.length; k++) {
-            s += a[k] * b[k];
-        }
-        return s;
+        return RefinedSolve.norm(rr, ri);
     }
 }

@@ -308,22 +308,11 @@ final class EdgeEverywhereSolve {
                 }
             }
         }
-        double[] xr = fr.clone();
-        double[] xi = fi.clone();
-        BandedLdlt.solve(n, band, re, im, xr, xi);
-        double[] rr = new double[n];
-        double[] ri = new double[n];
-        double fNorm = Math.sqrt(dot(fr, fr) + dot(fi, fi));
-        double before = residual(fr, fi, xr, xi, rr, ri) / fNorm;
-        // One step of iterative refinement (N. J. Higham, Accuracy and Stability of Numerical
-        // Algorithms, 2002, §12.2), as in the axial solve.
-        BandedLdlt.solve(n, band, re, im, rr, ri);
-        for (int k = 0; k < n; k++) {
-            xr[k] += rr[k];
-            xi[k] += ri[k];
-        }
-        double after = residual(fr, fi, xr, xi, rr, ri) / fNorm;
-        return new EddyTransverseField(this, xr, xi, before, after);
+        double[] xr = new double[n];
+        double[] xi = new double[n];
+        double[] r = RefinedSolve.run(fr, fi, xr, xi, (yr, yi) -> BandedLdlt.solve(n, band, re, im, yr, yi),
+                this::residual);
+        return new EddyTransverseField(this, xr, xi, r[0], r[1]);
     }
 
     /** r = f − S·x, matrix-free from the element matrices; returns ‖r‖₂. */
@@ -361,15 +350,7 @@ final class EdgeEverywhereSolve {
                 }
             }
         }
-        return Math.sqrt(dot(rr, rr) + dot(ri, ri));
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int k = 0; k < a.length; k++) {
-            s += a[k] * b[k];
-        }
-        return s;
+        return RefinedSolve.norm(rr, ri);
     }
 
     /** The solved vector potential; B from its eight local dofs per element. */
