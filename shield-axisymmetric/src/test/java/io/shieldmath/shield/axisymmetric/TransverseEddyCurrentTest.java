@@ -16,8 +16,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Conducting bodies of revolution in an alternating field across the axis (the first
- * azimuthal mode of the vector potential with eddy currents) against closed-form results
- * and against the independent scalar-potential solve. The geometry is invented for these tests.
+ * azimuthal mode: vector potential with eddy currents in the conductors, scalar potential
+ * elsewhere) against closed-form results and against the independent scalar-potential solve. The geometry is invented for these tests.
  */
 class TransverseEddyCurrentTest {
 
@@ -64,6 +64,26 @@ class TransverseEddyCurrentTest {
                     .shieldingFactor().value();
             table.append(String.format(Locale.ROOT, "  %6.0f Hz   %s   %.5f   %.5f%n", hz, s, exact, s.value() / exact));
             assertEquals(exact, s.value(), 0.005 * exact, table.toString());
+        }
+        System.out.print(table);
+    }
+
+    @Test
+    void aMagneticLayerInsideACopperLayerGivesTheLayeredCylindersFactor() {
+        // The interface between a non-conducting magnetic body (scalar potential, µr 200) and a
+        // conductor (vector potential) inside the solve: a ferrite tube (a = 10 mm, 0.5 mm) with
+        // a copper tube (1 mm) on it, 352 mm long, against shield-core's exact layered cylinder
+        // across the field (matched m = 1 Bessel solutions through both layers).
+        Medium ferrite = Medium.conductor("test ferrite", Conductivity.ZERO, 200);
+        StringBuilder table = new StringBuilder("ferrite in copper across the field: f   FE   exact   FE/exact\n");
+        for (double hz : new double[] {200, 2e3}) {
+            EstimatedValue s = Arrangement.of(Body.tube("ferrite", ferrite, mm(10), mm(0.5), mm(352)),
+                    Body.tube("copper", COPPER, mm(10.5), mm(1), mm(352))).inUniformTransverseField()
+                    .at(Frequency.ofHertz(hz)).shieldingFactorAt(Point.ORIGIN);
+            double exact = Shell.cylinderTransverse(mm(10)).wall(ferrite, mm(0.5)).then(COPPER, mm(1))
+                    .at(Frequency.ofHertz(hz)).shieldingFactor().value();
+            table.append(String.format(Locale.ROOT, "  %6.0f Hz   %s   %.5f   %.5f%n", hz, s, exact, s.value() / exact));
+            assertEquals(exact, s.value(), 0.01 * exact, table.toString());
         }
         System.out.print(table);
     }
