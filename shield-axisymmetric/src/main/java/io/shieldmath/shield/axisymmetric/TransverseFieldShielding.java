@@ -40,13 +40,16 @@ import java.util.Objects;
  *       Φ = Φ1(r, z)·cos φ, H = −∇Φ, minimising ∫ µ[(∂Φ1/∂r)² + (∂Φ1/∂z)² + Φ1²/r²] r dr dz with
  *       Φ1 = 0 on the axis and Φ1 = −H0·r on the far box (bilinear elements; complex µr(f) for a
  *       non-conducting body at frequency).</li>
- *   <li>At frequency with a conducting body: the modified vector potential of C. R. I. Emson and
- *       J. Simkin (IEEE Trans. Magn. 19 (1983) 2450) in its first mode,
- *       A = (a_r·sin φ, (u/r)·cos φ, a_z·sin φ), with edge elements for (a_r, a_z) and nodal ones for
- *       u, as C. G. Albert, O. Bíró and P. Lainer (arXiv:2008.13681) do for magnetostatics, gauged by
- *       u = 0 at every node that touches no conductor. Two to three unknowns per grid node, so a
- *       solve costs about ten times an axial one on the same mesh; a wall many skin depths thick
- *       may need {@link #withFineness(double)} below 1 to stay within the size cap.</li>
+ *   <li>At frequency with a conducting body: the A–ψ method of C. R. I. Emson and J. Simkin
+ *       ("An optimal method for 3-D eddy currents", IEEE Trans. Magn. 19 (1983) 2450): the
+ *       modified vector potential in its first mode, A = (a_r·sin φ, (u/r)·cos φ, a_z·sin φ),
+ *       inside the conductors only, with edge elements for (a_r, a_z) and nodal ones for u, as
+ *       C. G. Albert, O. Bíró and P. Lainer (arXiv:2008.13681) use for magnetostatics, and the
+ *       scalar potential above everywhere else, coupled on the conductors' surfaces. One unknown
+ *       per grid node outside the conductors and three to four inside, so on a can whose wall
+ *       is many skin depths thick the solve costs about three times an axial one on the same
+ *       mesh (less for thin walls), and a very fine mesh may need {@link #withFineness(double)}
+ *       below 1 to stay within the size cap.</li>
  * </ul>
  * The far box lies {@value CoilCoupling#DEFAULT_FAR_BOUNDARY} half-extents of the geometry
  * away. The applied field is exact on both discretisations, so with the bodies set to air the
@@ -144,8 +147,9 @@ public final class TransverseFieldShielding implements ShieldingModel<Transverse
 
     /**
      * This evaluation with another cap on the unknowns of one mesh (grid nodes); the eddy
-     * solve, with up to three unknowns per node, is capped at three times this. Either solve
-     * is also capped at {@value MeshTooLargeException#MAX_BAND_ENTRIES} band entries.
+     * solve, with up to four unknowns per node inside a conductor, is capped at three times
+     * this. Either solve is also capped at {@value MeshTooLargeException#MAX_BAND_ENTRIES}
+     * stored matrix entries.
      *
      * @param unknowns the cap, 1000 to {@value CoilCoupling#DEFAULT_MAX_UNKNOWNS}
      * @return the new evaluation; this one is unchanged

@@ -30,7 +30,7 @@ import java.util.Objects;
  *
  * <p>Its shielding effectiveness is the smaller of the two, in dB; each evaluation keeps its
  * own options (tolerance, fineness). Each frequency costs an axial and a transverse solve
- * (with eddy currents, the transverse one costs several axial ones).
+ * (with eddy currents, the transverse one is the dearer).
  *
  * <p>Design tools take it as any {@link ShieldingModel}. {@code Requirement.marginOf(either)}
  * gives each entry's margin against the worse direction: for an entry at one frequency exactly

@@ -63,8 +63,8 @@
  * loss part. Bodies of revolution about the coils' axis only: a slot, a seam or an off-axis
  * hole needs a three-dimensional model. A uniform field across the axis is solved by
  * {@link io.shieldmath.shield.axisymmetric.TransverseFieldShielding} as the first azimuthal
- * mode: the magnetic scalar potential statically, the vector potential with eddy currents at
- * frequency. A coil with a winding section
+ * mode: the magnetic scalar potential statically, and with eddy currents at frequency the
+ * vector potential inside the conductors coupled to the scalar potential outside them. A coil with a winding section
  * carries a uniform current density; the coils' own resistance is not modelled. Results are
  * estimates for idealised geometry: real shields are limited by seams, fasteners and the
  * alloy's handling, and must be verified by measurement.

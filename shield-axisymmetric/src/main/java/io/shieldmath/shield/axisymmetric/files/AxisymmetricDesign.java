@@ -204,7 +204,7 @@ public final class AxisymmetricDesign {
      * worst shielding over the sensor region: along the axis ({@link AxialFieldShielding}),
      * across it ({@link TransverseFieldShielding}), or the smaller of the two
      * ({@link WorstDirectionShielding}, both solved at each frequency, so it costs an axial and
-     * a transverse solve; a transverse solve with eddy currents costs several axial ones).
+     * a transverse solve; with eddy currents the transverse one is the dearer).
      *
      * @param bodies    the bodies, none null, with different names and not overlapping
      * @param sensor    where the field is read, not null

@@ -34,6 +34,13 @@ package io.shieldmath.shield.axisymmetric.numerics;
  * Cost: about n·b²/2 complex multiply-adds (4 real multiplications and 4 additions each)
  * for n unknowns and half-bandwidth b, and n·(b+1) storage per part.
  *
+ * <p>Envelope form. The same algorithm also runs on envelope (profile) storage, where each
+ * row keeps only the entries from its own first non-zero column to the diagonal (George and
+ * Liu, 1981, ch. 4; the band is the special case first[i] = i − b, and the band methods use
+ * it). A system whose rows reach back unevenly, such as the transverse eddy-current system
+ * whose rows through a conductor carry three unknowns per node and the others one, then
+ * costs Σ (i − first[i])²/2 instead of n·b²/2.
+ *
  * <p>Stateless; every method works only on the arrays it is given.
  */
 public final class BandedLdlt {
@@ -52,26 +59,91 @@ public final class BandedLdlt {
      * @return the smallest |D_i| relative to the largest |A_ii|, a pivot-size indicator
      */
     public static double factor(int n, int b, double[] re, double[] im) {
-        final int w = b + 1;
+        int[] first = new int[n];
+        int[] diag = new int[n];
+        bandLayout(n, b, first, diag);
+        return factor(n, first, diag, re, im);
+    }
+
+    /**
+     * Solves A·x = f with the factors from {@link #factor}, in place.
+     *
+     * @param n  the order
+     * @param b  the half-bandwidth
+     * @param re the factored real parts
+     * @param im the factored imaginary parts
+     * @param xr on entry the right-hand side's real parts, on return the solution's
+     * @param xi on entry the right-hand side's imaginary parts, on return the solution's
+     */
+    public static void solve(int n, int b, double[] re, double[] im, double[] xr, double[] xi) {
+        int[] first = new int[n];
+        int[] diag = new int[n];
+        bandLayout(n, b, first, diag);
+        solve(n, first, diag, re, im, xr, xi);
+    }
+
+    /** The band as an envelope: first column max(0, i − b), diagonal at i·(b+1) + b. */
+    private static void bandLayout(int n, int b, int[] first, int[] diag) {
+        for (int i = 0; i < n; i++) {
+            first[i] = Math.max(0, i - b);
+            diag[i] = i * (b + 1) + b;
+        }
+    }
+
+    /**
+     * The envelope layout of a symmetric matrix whose row i holds entries only from column
+     * first[i] to the diagonal: rows stored one after another, row i's entries A(i, k) for
+     * k = first[i] … i at consecutive offsets ending at its diagonal.
+     *
+     * @param first the first stored column of every row, 0 ≤ first[i] ≤ i; the envelope must
+     *              hold every non-zero of L too, which it does because fill stays inside each
+     *              row's envelope (A. George and J. W. H. Liu, <i>Computer Solution of Large
+     *              Sparse Positive Definite Systems</i>, Prentice-Hall, 1981, §4.2)
+     * @return the offsets of the diagonals; the storage has {@code diag[n − 1] + 1} entries
+     */
+    public static int[] envelopeDiagonals(int[] first) {
+        int[] diag = new int[first.length];
+        long end = -1;
+        for (int i = 0; i < first.length; i++) {
+            end += i - first[i] + 1;
+            diag[i] = Math.toIntExact(end);
+        }
+        return diag;
+    }
+
+    /**
+     * {@link #factor(int, int, double[], double[])} on envelope storage (see
+     * {@link #envelopeDiagonals}): the same algorithm, each row's run starting at its own
+     * first column, so rows with a short reach cost only what they reach. Work about
+     * Σ (i − first[i])²/2 complex multiply-adds.
+     *
+     * @param n     the order
+     * @param first the first stored column of every row
+     * @param diag  the offset of every row's diagonal
+     * @param re    the real parts; on return L and 1/D
+     * @param im    the imaginary parts; on return L and 1/D
+     * @return the smallest |D_i| relative to the largest |A_ii|, a pivot-size indicator
+     */
+    public static double factor(int n, int[] first, int[] diag, double[] re, double[] im) {
         double minPivot = Double.POSITIVE_INFINITY;
         double maxDiag = 0;
         for (int i = 0; i < n; i++) {
-            final int ri = i * w;          // row i block start; column k sits at ri + k − i + b
-            final int k0 = Math.max(0, i - b);
+            final int ri = diag[i] - i;       // row i's column k sits at ri + k
+            final int k0 = first[i];
             for (int k = k0; k < i; k++) {
-                final int rk = k * w;
-                // u_ik = A_ik − Σ_{m = max(k0, k−b)}^{k−1} u_im · L_km
-                final int m0 = Math.max(k0, k - b);
+                final int rk = diag[k] - k;
+                // u_ik = A_ik − Σ_{m = max(k0, first[k])}^{k−1} u_im · L_km
+                final int m0 = Math.max(k0, first[k]);
                 // Two independent accumulators per part: a single running sum is bound by the
                 // latency of one floating-point add per term; two halve that (the JIT does not
                 // reassociate floating-point sums itself). The order of summation changes, not
                 // the count of operations, so the rounding error bound is the same.
-                double sr0 = re[ri + k - i + b];
-                double si0 = im[ri + k - i + b];
+                double sr0 = re[ri + k];
+                double si0 = im[ri + k];
                 double sr1 = 0;
                 double si1 = 0;
-                int pi = ri + m0 - i + b;
-                int pk = rk + m0 - k + b;
+                int pi = ri + m0;
+                int pk = rk + m0;
                 final int len = k - m0;
                 final int end = pi + (len & ~1);
                 for (; pi < end; pi += 2, pk += 2) {
@@ -96,15 +168,16 @@ public final class BandedLdlt {
                     sr0 -= ar * br - ai * bi;
                     si0 -= ar * bi + ai * br;
                 }
-                re[ri + k - i + b] = sr0 + sr1;
-                im[ri + k - i + b] = si0 + si1;
+                re[ri + k] = sr0 + sr1;
+                im[ri + k] = si0 + si1;
             }
             // D_i = A_ii − Σ_m u_im · (u_im / D_m), and L_im = u_im / D_m (1/D_m is stored).
-            double dr = re[ri + b];
-            double di = im[ri + b];
+            final int d = diag[i];
+            double dr = re[d];
+            double di = im[d];
             for (int m = k0; m < i; m++) {
-                final int p = ri + m - i + b;
-                final int q = m * w + b;
+                final int p = ri + m;
+                final int q = diag[m];
                 final double ur = re[p];
                 final double ui = im[p];
                 final double lr = ur * re[q] - ui * im[q];
@@ -114,35 +187,35 @@ public final class BandedLdlt {
                 re[p] = lr;
                 im[p] = li;
             }
-            maxDiag = Math.max(maxDiag, Math.hypot(re[ri + b], im[ri + b]));
+            maxDiag = Math.max(maxDiag, Math.hypot(re[d], im[d]));
             final double mod2 = dr * dr + di * di;
             minPivot = Math.min(minPivot, Math.sqrt(mod2));
-            re[ri + b] = dr / mod2;
-            im[ri + b] = -di / mod2;
+            re[d] = dr / mod2;
+            im[d] = -di / mod2;
         }
         return maxDiag > 0 ? minPivot / maxDiag : 0;
     }
 
     /**
-     * Solves A·x = f with the factors from {@link #factor}, in place.
+     * {@link #solve(int, int, double[], double[], double[], double[])} with envelope factors
+     * from {@link #factor(int, int[], int[], double[], double[])}, in place.
      *
-     * @param n  the order
-     * @param b  the half-bandwidth
-     * @param re the factored real parts
-     * @param im the factored imaginary parts
-     * @param xr on entry the right-hand side's real parts, on return the solution's
-     * @param xi on entry the right-hand side's imaginary parts, on return the solution's
+     * @param n     the order
+     * @param first the first stored column of every row
+     * @param diag  the offset of every row's diagonal
+     * @param re    the factored real parts
+     * @param im    the factored imaginary parts
+     * @param xr    on entry the right-hand side's real parts, on return the solution's
+     * @param xi    on entry the right-hand side's imaginary parts, on return the solution's
      */
-    public static void solve(int n, int b, double[] re, double[] im, double[] xr, double[] xi) {
-        final int w = b + 1;
+    public static void solve(int n, int[] first, int[] diag, double[] re, double[] im, double[] xr, double[] xi) {
         // L·y = f (forward), rows of L are contiguous.
         for (int i = 0; i < n; i++) {
-            final int ri = i * w;
-            final int k0 = Math.max(0, i - b);
+            final int ri = diag[i] - i;
             double sr = xr[i];
             double si = xi[i];
-            int p = ri + k0 - i + b;
-            for (int k = k0; k < i; k++, p++) {
+            for (int k = first[i]; k < i; k++) {
+                final int p = ri + k;
                 sr -= re[p] * xr[k] - im[p] * xi[k];
                 si -= re[p] * xi[k] + im[p] * xr[k];
             }
@@ -151,7 +224,7 @@ public final class BandedLdlt {
         }
         // z = D⁻¹ y
         for (int i = 0; i < n; i++) {
-            final int q = i * w + b;
+            final int q = diag[i];
             final double yr = xr[i];
             final double yi = xi[i];
             xr[i] = yr * re[q] - yi * im[q];
@@ -159,12 +232,11 @@ public final class BandedLdlt {
         }
         // Lᵀ·x = z (backward): column i of Lᵀ is row i of L, so scatter row i once x_i is final.
         for (int i = n - 1; i >= 0; i--) {
-            final int ri = i * w;
-            final int k0 = Math.max(0, i - b);
+            final int ri = diag[i] - i;
             final double vr = xr[i];
             final double vi = xi[i];
-            int p = ri + k0 - i + b;
-            for (int k = k0; k < i; k++, p++) {
+            for (int k = first[i]; k < i; k++) {
+                final int p = ri + k;
                 xr[k] -= re[p] * vr - im[p] * vi;
                 xi[k] -= re[p] * vi + im[p] * vr;
             }

@@ -65,18 +65,9 @@ public final class TransverseSolve {
      */
     public TransverseSolve(Mesh mesh, double hertz, boolean bodiesAsAir) {
         this.mesh = mesh;
-        int m = mesh.materials;
-        muRe = new double[m];
-        muIm = new double[m];
-        for (int k = 0; k < m; k++) {
-            if (k == 0 || bodiesAsAir) {
-                muRe[k] = 1;
-            } else {
-                // µr = µ' − jµ''; the coefficient of the energy is µr itself.
-                muRe[k] = mesh.layout.mu[k].real(hertz);
-                muIm[k] = -mesh.layout.mu[k].loss(hertz);
-            }
-        }
+        muRe = new double[mesh.materials];
+        muIm = new double[mesh.materials];
+        permeabilities(mesh, hertz, bodiesAsAir, muRe, muIm);
         boolean isReal = true;
         for (double v : muIm) {
             isReal &= v == 0;
@@ -117,8 +108,24 @@ public final class TransverseSolve {
         pivotRatio = real ? BandedLdlt.factorReal(n, b, re) : BandedLdlt.factor(n, b, re, im);
     }
 
+    /**
+     * Every material's relative permeability µr = µ' − jµ'' at the frequency (1 for air, and
+     * for every body when they are taken as air): the coefficient of the scalar energy.
+     * Shared with {@link TransverseEddySolve}.
+     */
+    static void permeabilities(Mesh mesh, double hertz, boolean bodiesAsAir, double[] muRe, double[] muIm) {
+        for (int k = 0; k < mesh.materials; k++) {
+            if (k == 0 || bodiesAsAir) {
+                muRe[k] = 1;
+            } else {
+                muRe[k] = mesh.layout.mu[k].real(hertz);
+                muIm[k] = -mesh.layout.mu[k].loss(hertz);
+            }
+        }
+    }
+
     /** ∫ [∂N_a/∂r·∂N_b/∂r + ∂N_a/∂z·∂N_b/∂z + N_a·N_b/r²] r dr dz of every element, 16 per element. */
-    private static double[] elementMatrices(Mesh mesh) {
+    static double[] elementMatrices(Mesh mesh) {
         int ne = (mesh.nr - 1) * (mesh.nz - 1);
         double[] k = new double[16 * ne];
         double[] nv = new double[4];

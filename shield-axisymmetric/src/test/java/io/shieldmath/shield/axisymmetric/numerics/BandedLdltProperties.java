@@ -20,7 +20,10 @@ import org.junit.jupiter.api.Test;
  * The banded complex LDLᵀ against an independent implementation, Commons Math's dense LU
  * with partial pivoting over its Complex field, on random complex symmetric band matrices
  * with the structure of the finite-element matrix: real part symmetric positive definite,
- * imaginary part symmetric positive semidefinite (some rows without eddy current).
+ * imaginary part symmetric positive semidefinite (some rows without eddy current); and the
+ * envelope form on random quasi-definite matrices with the structure of the coupled
+ * vector/scalar-potential system (a block positive in its real part, a block negative, any
+ * coupling between them).
  */
 class BandedLdltProperties {
 
@@ -125,6 +128,79 @@ class BandedLdltProperties {
                 assertTrue(Math.abs(xr[i] - yr[i]) <= 1e-12 * (1 + Math.abs(yr[i])), "seed " + seed);
                 assertTrue(Math.abs(xi[i] - yi[i]) <= 1e-12 * (1 + Math.abs(yi[i])), "seed " + seed);
             }
+        });
+    }
+
+    @Test
+    void envelopeLdltSolvesQuasiDefiniteSystemsLikeDenseLuWithPivoting() {
+        qt().withExamples(TRIES).forAll(longs().all()).checkAssert(seed -> {
+            Random rnd = new Random(seed);
+            int n = 1 + rnd.nextInt(40);
+            int[] first = new int[n];
+            boolean[] potentialA = new boolean[n];
+            for (int i = 0; i < n; i++) {
+                first[i] = i - rnd.nextInt(Math.min(i, 12) + 1);
+                potentialA[i] = rnd.nextBoolean();
+            }
+            int[] diag = BandedLdlt.envelopeDiagonals(first);
+            double[] re = new double[diag[n - 1] + 1];
+            double[] im = new double[re.length];
+            double scale = Math.pow(10, rnd.nextInt(7) - 3);
+            // The positive block (vector potential) and the negative one (scalar potential)
+            // are each diagonally dominant; couplings between the blocks are free; the
+            // imaginary part is a sum of PSD 2×2 blocks within the positive block.
+            for (int i = 0; i < n; i++) {
+                for (int k = first[i]; k < i; k++) {
+                    double a = rnd.nextGaussian();
+                    re[diag[i] - i + k] = a;
+                    if (potentialA[i] == potentialA[k]) {
+                        double sign = potentialA[i] ? 1 : -1;
+                        re[diag[i]] += sign * (Math.abs(a) + 0.1);
+                        re[diag[k]] += sign * (Math.abs(a) + 0.1);
+                        if (potentialA[i] && rnd.nextBoolean()) {
+                            double c = scale * Math.abs(rnd.nextGaussian());
+                            im[diag[i] - i + k] -= c;
+                            im[diag[i]] += c;
+                            im[diag[k]] += c;
+                        }
+                    }
+                }
+                re[diag[i]] += potentialA[i] ? 0.5 : -0.5;
+            }
+            Complex[][] dense = new Complex[n][n];
+            for (int i = 0; i < n; i++) {
+                for (int k = 0; k < n; k++) {
+                    dense[i][k] = Complex.ZERO;
+                }
+            }
+            for (int i = 0; i < n; i++) {
+                for (int k = first[i]; k <= i; k++) {
+                    Complex v = new Complex(re[diag[i] - i + k], im[diag[i] - i + k]);
+                    dense[i][k] = v;
+                    dense[k][i] = v;
+                }
+            }
+            double[] xr = new double[n];
+            double[] xi = new double[n];
+            Complex[] f = new Complex[n];
+            for (int i = 0; i < n; i++) {
+                xr[i] = rnd.nextGaussian();
+                xi[i] = rnd.nextGaussian();
+                f[i] = new Complex(xr[i], xi[i]);
+            }
+            FieldVector<Complex> ref = new FieldLUDecomposition<>(
+                    new Array2DRowFieldMatrix<>(ComplexField.getInstance(), dense)).getSolver()
+                    .solve(new ArrayFieldVector<>(f));
+            double pivot = BandedLdlt.factor(n, first, diag, re, im);
+            BandedLdlt.solve(n, first, diag, re, im, xr, xi);
+            double diff = 0;
+            double norm = 0;
+            for (int i = 0; i < n; i++) {
+                diff += Math.pow(xr[i] - ref.getEntry(i).getReal(), 2) + Math.pow(xi[i] - ref.getEntry(i).getImaginary(), 2);
+                norm += Math.pow(ref.getEntry(i).abs(), 2);
+            }
+            assertTrue(pivot > 0, "pivot ratio " + pivot);
+            assertTrue(Math.sqrt(diff / norm) < 1e-9, "seed " + seed + " n " + n + ": " + Math.sqrt(diff / norm));
         });
     }
 }
