@@ -4,7 +4,7 @@
 
 /**
  * shield-axisymmetric: finite shields of revolution (discs, annular plates, tubes, caps and
- * cans) between coaxial coils or in a uniform axial field, solved by axisymmetric finite
+ * cans) between coaxial coils or in a uniform field along or across the axis, solved by axisymmetric finite
  * elements. The numerics live in a package that is not exported. The package {@code files}
  * reads and writes whole designs of every kind (planar, shell, axisymmetric) in one file.
  */

@@ -29,7 +29,19 @@ import java.util.Objects;
  * model reports the smaller of the two worst factors, the usual design figure, not that bound.
  *
  * <p>Its shielding effectiveness is the smaller of the two, in dB; each evaluation keeps its
- * own options (tolerance, fineness). Immutable and thread-safe.
+ * own options (tolerance, fineness). Each frequency costs an axial and a transverse solve
+ * (with eddy currents, the transverse one is the dearer).
+ *
+ * <p>Design tools take it as any {@link ShieldingModel}. {@code Requirement.marginOf(either)}
+ * gives each entry's margin against the worse direction: for an entry at one frequency exactly
+ * the smaller of the lines of {@code marginOf(either.axial())} and
+ * {@code marginOf(either.transverse())}; for a band, the band search runs on the smaller SE,
+ * so the line is the lowest of the two directions over the band. {@code BandSearch} and
+ * {@code ThicknessSolver} likewise size a design for whichever direction is worse. A whole
+ * design file holds this model as the applied field's {@code "direction": "worst"}
+ * ({@link io.shieldmath.shield.axisymmetric.files.DesignFieldDirection#WORST}).
+ *
+ * <p>Immutable and thread-safe.
  */
 public final class WorstDirectionShielding implements ShieldingModel<WorstDirectionSolution> {
 

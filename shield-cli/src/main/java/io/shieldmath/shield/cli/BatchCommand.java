@@ -35,12 +35,17 @@ import java.util.Objects;
  * <p>Every kind of design file is evaluated (versions 1 to 3, read by
  * {@link WholeDesignFile}): a planar stack (columns {@code frequency_hz, se_db, absorption_db,
  * reflection_db, multiple_reflection_db}), a closed shell with its openings ({@code frequency_hz,
- * se_db}), and an axisymmetric arrangement between coils or in an applied axial field
- * ({@code frequency_hz, se_db, discretisation_estimate_db}: the insertion loss or the worst
- * shielding over the sensor region, and the change between the last two meshes; each frequency
- * is solved on its own, exactly as {@code WholeDesign.model().at(frequency)} solves it, so the
- * numbers equal the library's). Every column name ends in its unit. The JSON header object
- * names the design, its kind and the field or source it faces.
+ * se_db}), and an axisymmetric arrangement between coils or in an applied axial or transverse
+ * field ({@code frequency_hz, se_db, discretisation_estimate_db}: the insertion loss or the
+ * worst shielding over the sensor region, and the change between the last two meshes; each
+ * frequency is solved on its own, exactly as {@code WholeDesign.model().at(frequency)} solves
+ * it, so the numbers equal the library's). In a field of either direction (design file
+ * direction {@code "worst"}) the columns are {@code frequency_hz, se_db,
+ * discretisation_estimate_db, axial_se_db, transverse_se_db, worse_direction}: the smaller
+ * shielding, its estimate, both directions' shielding and the word {@code axial} or
+ * {@code transverse} for the direction that gave the smaller (axial on a tie). Every numeric
+ * column name ends in its unit. The JSON header object names the design, its kind and the
+ * field or source it faces.
  *
  * <p>Once a run has taken more than about a second (finite-element solves take from a tenth of
  * a second to several seconds per frequency), a short line per frequency done goes to standard
@@ -136,7 +141,8 @@ public final class BatchCommand {
     private static final String HELP_TEXT = USAGE_TEXT + "\n       shield-batch --help | --version\n\n"
             + "Evaluates a shield design file (JSON) of any kind (planar stack, closed shell, axisymmetric\n"
             + "arrangement) at frequencies and writes CSV or JSON on standard output, units in the column\n"
-            + "names. A run longer than about a second reports each frequency done on standard error.\n\n"
+            + "names; a design in a field of either direction (\"worst\") also names the worse direction.\n"
+            + "A run longer than about a second reports each frequency done on standard error.\n\n"
             + "  --design FILE     the design file (\"format\": \"shield-design\")\n"
             + "  --catalogue FILE  a catalogue file whose materials extend the built-in ones\n"
             + "  --band TEXT       a band such as \"10 Hz to 100 kHz\" (default: the design's)\n"
@@ -259,7 +265,8 @@ public final class BatchCommand {
                 int points = o.points() > 0 ? o.points() : design.points();
                 double[] all = b.logSpacedHertz(points);
                 for (int i = 0; i < all.length; i++) {
-                    output.write(all[i], evaluation.at(all[i]));
+                    DesignEvaluation.Row row = evaluation.row(all[i]);
+                    output.write(all[i], row.values(), row.texts());
                     progress.done("frequency " + (i + 1) + " of " + all.length, all[i]);
                 }
             }
@@ -289,10 +296,10 @@ public final class BatchCommand {
                 continue;
             }
             double hz;
-            double[] result;
+            DesignEvaluation.Row result;
             try {
                 hz = frequencyHertz(s, evaluation.lowHz(), evaluation.highHz());
-                result = evaluation.at(hz);
+                result = evaluation.row(hz);
             } catch (CommandFailure f) {
                 if (f.exitCode() != BAD_INPUT) {
                     throw f;
@@ -305,7 +312,7 @@ public final class BatchCommand {
                 failed++;
                 continue;
             }
-            output.write(hz, result);
+            output.write(hz, result.values(), result.texts());
             progress.done("standard input line " + lines.lineNumber(), hz);
         }
         if (failed > 0) {

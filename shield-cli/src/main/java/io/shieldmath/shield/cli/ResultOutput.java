@@ -56,7 +56,8 @@ final class ResultOutput {
      * @param field   the incident field's or source's description for the JSON form
      * @param lines   for JSON: one complete object per line (JSON Lines), as a co-process needs,
      *                instead of one document that stays open until the input ends
-     * @param columns the names of the values after {@code frequency_hz}, each ending in its unit
+     * @param columns the names of the values after {@code frequency_hz}: the numbers', each ending in its
+     *                unit, then those of the texts (words such as {@code axial}), if any
      */
     ResultOutput(OutputStream out, boolean json, String title, String kind, String field, boolean lines,
                  String[] columns) {
@@ -72,6 +73,14 @@ final class ResultOutput {
 
     /** Writes one result, after the header if it is the first; values in the order of the columns. */
     void write(double hz, double[] values) throws CommandFailure {
+        write(hz, values, new String[0]);
+    }
+
+    /**
+     * Writes one result, after the header if it is the first: the numbers in the order of the
+     * columns, then the texts (plain words, written as they are in CSV and as JSON strings).
+     */
+    void write(double hz, double[] values, String[] texts) throws CommandFailure {
         for (int i = 0; i < values.length; i++) {
             finite(words(columns[i]), values[i], hz);
         }
@@ -79,16 +88,19 @@ final class ResultOutput {
         try {
             if (jsonLines) {
                 header();
-                writer.write(object(b, hz, values).append('\n').toString());
+                writer.write(object(b, hz, values, texts).append('\n').toString());
             } else if (json) {
                 writer.write(count > 0 ? ",\n" : "{\n  \"design\": " + jsonString(title) + ",\n  \"kind\": "
                         + jsonString(kind) + ",\n  \"field\": " + jsonString(field) + ",\n  \"results\": [\n");
-                writer.write(object(b.append("    "), hz, values).toString());
+                writer.write(object(b.append("    "), hz, values, texts).toString());
             } else {
                 header();
                 b.append(shortest(hz));
                 for (double v : values) {
                     b.append(',').append(String.format(Locale.ROOT, "%.6f", v));
+                }
+                for (String t : texts) {
+                    b.append(',').append(t);
                 }
                 writer.write(b.append('\n').toString());
             }
@@ -98,10 +110,13 @@ final class ResultOutput {
         count++;
     }
 
-    private StringBuilder object(StringBuilder b, double hz, double[] values) {
+    private StringBuilder object(StringBuilder b, double hz, double[] values, String[] texts) {
         b.append("{\"frequency_hz\": ").append(shortest(hz));
         for (int i = 0; i < values.length; i++) {
             b.append(", \"").append(columns[i]).append("\": ").append(String.format(Locale.ROOT, "%.6f", values[i]));
+        }
+        for (int i = 0; i < texts.length; i++) {
+            b.append(", \"").append(columns[values.length + i]).append("\": ").append(jsonString(texts[i]));
         }
         return b.append('}');
     }

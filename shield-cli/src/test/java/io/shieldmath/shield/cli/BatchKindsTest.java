@@ -6,6 +6,10 @@ package io.shieldmath.shield.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import io.shieldmath.shield.axisymmetric.EstimatedValue;
+import io.shieldmath.shield.axisymmetric.FieldDirection;
+import io.shieldmath.shield.axisymmetric.TransverseFieldSolution;
+import io.shieldmath.shield.axisymmetric.WorstDirectionSolution;
 import io.shieldmath.shield.axisymmetric.files.WholeDesign;
 import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
 import io.shieldmath.shield.materials.Catalogue;
@@ -136,6 +140,54 @@ class BatchKindsTest {
         assertTrue(r.out().contains("{\"frequency_hz\": 100.0, \"se_db\": " + String.format(Locale.ROOT, "%.6f", se)),
                 r.out());
         assertTrue(r.out().endsWith("\n  ]\n}\n"), r.out());
+    }
+
+    @Test
+    void canAcrossTheAxisGivesTheTransverseSolversNumbers(@TempDir Path dir) throws IOException {
+        String across = FIELD.replace("\"axial\"", "\"transverse\"");
+        Path f = BatchCommandTest.write(dir, "across.json", across);
+        Run r = run("", "--design", f.toString());
+        assertEquals(0, r.code(), r.err());
+        List<String> lines = r.out().lines().toList();
+        assertEquals("frequency_hz,se_db,discretisation_estimate_db", lines.get(0));
+        onlyData(lines, 2);
+        sameAsLibrary(across, lines);
+        assertTrue(WholeDesignFile.parse(across, Catalogue.builtIn()).model().at(Frequency.ofHertz(100))
+                instanceof TransverseFieldSolution);
+    }
+
+    @Test
+    void canInAFieldOfEitherDirectionSaysWhichIsWorse(@TempDir Path dir) throws IOException {
+        String either = FIELD.replace("\"axial\"", "\"worst\"");
+        Path f = BatchCommandTest.write(dir, "either.json", either);
+        Run r = run("", "--design", f.toString());
+        assertEquals(0, r.code(), r.err());
+        List<String> lines = r.out().lines().toList();
+        assertEquals("frequency_hz,se_db,discretisation_estimate_db,axial_se_db,transverse_se_db,worse_direction",
+                lines.get(0));
+        sameAsLibrary(either, lines);
+        WholeDesign d = WholeDesignFile.parse(either, Catalogue.builtIn());
+        double[] hz = d.band().logSpacedHertz(d.points());
+        for (int i = 0; i < hz.length; i++) {
+            WorstDirectionSolution w = (WorstDirectionSolution) d.model().at(Frequency.ofHertz(hz[i]));
+            boolean axial = w.worstDirection() == FieldDirection.AXIAL;
+            EstimatedValue worse = axial ? w.axial().worstShieldingDb() : w.transverse().worstShieldingDb();
+            assertEquals(String.format(Locale.ROOT, "%s,%.6f,%.6f,%.6f,%.6f,%s", hz[i], worse.value(), worse.estimate(),
+                    w.axial().shieldingEffectivenessDb(), w.transverse().shieldingEffectivenessDb(),
+                    axial ? "axial" : "transverse"), lines.get(i + 1));
+            // The smaller of the two, by definition of the worse direction.
+            assertEquals(Math.min(w.axial().shieldingEffectivenessDb(), w.transverse().shieldingEffectivenessDb()),
+                    worse.value());
+        }
+        Run json = run("100 Hz\n", "--design", f.toString(), "--stdin", "--format", "json");
+        assertEquals(0, json.code(), json.err());
+        List<String> records = json.out().lines().toList();
+        assertEquals("{\"design\": \"copper can\", \"kind\": \"axisymmetric\", \"field\": \"uniform field, the worse "
+                + "of axial and transverse, sensor point on the axis at z 0.00000 mm\"}", records.get(0));
+        String[] csv = lines.get(1).split(",");
+        assertEquals("{\"frequency_hz\": 100.0, \"se_db\": " + csv[1] + ", \"discretisation_estimate_db\": " + csv[2]
+                + ", \"axial_se_db\": " + csv[3] + ", \"transverse_se_db\": " + csv[4] + ", \"worse_direction\": \""
+                + csv[5] + "\"}", records.get(1));
     }
 
     @Test

@@ -131,6 +131,14 @@ public final class Requirement {
      * The margin of a design against every entry: its worst SE in each band minus the
      * required SE, found by {@link BandSearch}.
      *
+     * <p>Any model of the common contract will do. For a shield whose field may come from
+     * more than one direction, pass a model whose SE is already the worse of the directions:
+     * shield-axisymmetric's {@code WorstDirectionShielding} (a body of revolution in a uniform
+     * field along or across its axis) gives at each frequency the smaller of its axial and
+     * transverse SE, so each line here is the smaller of the two directions' margins at a
+     * single frequency, and over a band the lowest of that smaller SE (the band search runs on
+     * it, so a band's line can lie lower than either direction's own search found).
+     *
      * @param model the design's model, not null
      * @return the margins, with the worst named
      * @throws IllegalStateException if the requirement has no entries

@@ -10,17 +10,21 @@ import static io.shieldmath.shield.quantity.Quantities.nT;
 import static io.shieldmath.shield.quantity.Quantities.uT;
 
 import io.shieldmath.shield.axisymmetric.Arrangement;
-import io.shieldmath.shield.axisymmetric.AxialFieldShielding;
 import io.shieldmath.shield.axisymmetric.Body;
 import io.shieldmath.shield.axisymmetric.CanEnd;
 import io.shieldmath.shield.axisymmetric.CoilCoupling;
 import io.shieldmath.shield.axisymmetric.EstimatedValue;
+import io.shieldmath.shield.axisymmetric.FieldDirection;
+import io.shieldmath.shield.axisymmetric.SaturationOnset;
 import io.shieldmath.shield.axisymmetric.SaturationSolution;
 import io.shieldmath.shield.axisymmetric.SaturationStudy;
 import io.shieldmath.shield.axisymmetric.SensorRegion;
+import io.shieldmath.shield.axisymmetric.WorstDirectionShielding;
+import io.shieldmath.shield.axisymmetric.WorstDirectionSolution;
 import io.shieldmath.shield.axisymmetric.files.AxisymmetricDesign;
 import io.shieldmath.shield.axisymmetric.files.DesignBody;
 import io.shieldmath.shield.axisymmetric.files.DesignCoil;
+import io.shieldmath.shield.axisymmetric.files.DesignFieldDirection;
 import io.shieldmath.shield.axisymmetric.files.DesignSensor;
 import io.shieldmath.shield.axisymmetric.files.WholeDesign;
 import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
@@ -42,6 +46,8 @@ import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -52,6 +58,7 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.TreeSet;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
@@ -70,13 +77,17 @@ import java.util.function.DoubleFunction;
  * <p>The program states the scenario, computes the required SE per band, and computes every
  * candidate it may recommend with the axisymmetric finite-element solver: round plates of a
  * stated size between each source and the sensor, and real cans (capped tubes with a cable hole
- * in one cap, and an open tube) around the sensor in the ambient field. It ranks them by mass
- * against the requirement and recommends the lightest that meets it. The same plates as
+ * in one cap, and an open tube) around the sensor in the ambient field, whose direction is not
+ * known: each can counts the worse of a field along its axis and one across it
+ * ({@link WorstDirectionShielding}). It ranks them by mass against the requirement and
+ * recommends the lightest that meets it, saying which direction is the worse one where its
+ * margin is smallest. The same plates as
  * infinite sheets between the same coils are computed beside them, as a separate, labelled
  * comparison that is never recommended. It writes into an output folder a CSV of the results,
- * the whole recommended design as a design file (version 3, with the study's mesh fineness, so
- * that it evaluates to the printed numbers), the SE plot, and field maps of the bench case and
- * of the recommended can (PNG and SVG).
+ * the whole recommended design as a design file (version 3, the can's applied field
+ * {@code "worst"} of the two directions, with the study's mesh fineness, so that it evaluates
+ * to the printed numbers), the SE plot, and field maps of the bench case and of the recommended
+ * can (PNG and SVG).
  *
  * <p>Solves run on {@link Runtime#availableProcessors()} threads; results do not depend on the
  * number of threads (the solver gives bit-identical results for equal inputs).
@@ -95,10 +106,12 @@ public final class DesignStudy {
     static final Coil SENSOR_LOOP = Coil.loop(mm(3), 1);
     static final Length CHARGER_DISTANCE = mm(60);
     static final Length TRANSFORMER_DISTANCE = mm(300);
-    /** The cans' inner radius and overall length, and the cable hole's radius (illustrative). */
+    /** The cans' inner radius and overall length (illustrative). */
     static final Length CAN_RADIUS = mm(15);
     static final Length CAN_LENGTH = mm(60);
+    /** The radii of the two cable holes the cans are offered with: 6 mm and 2 mm across (illustrative). */
     static final Length CABLE_HOLE = mm(3);
+    static final Length SMALL_CABLE_HOLE = mm(1);
     /** The sensor inside a can: a cylinder 3 mm in radius and 10 mm long at the centre. */
     static final SensorRegion SENSOR = SensorRegion.cylinder(mm(3), mm(10));
     /** Below this frequency the transformer's field dominates, above it the charger's. */
@@ -109,10 +122,21 @@ public final class DesignStudy {
      * on two cores; each result's discretisation estimate is printed beside it.
      */
     static final double FINENESS = 0.5;
+    /**
+     * The mesh fineness for the cans, in both directions: the solver's lowest, so that the
+     * cans' solves across the axis (with eddy currents, dearer than axial ones) keep the study's
+     * time. At {@link #FINENESS} a
+     * transverse solve of the 1 mm nickel-iron can at 20 kHz takes about four times as long and
+     * moves its SE by less than 0.1 dB; each SE's discretisation estimate is printed beside it.
+     */
+    static final double CAN_FINENESS = 0.25;
     /** The frequencies of the sweep table and plot besides the requirement's. */
     static final double[] SWEEP_HZ = {10, 100, 500, 2e3, 5e3, 1e4, 1e5, 2e5};
     /** The points of the written design's own sweep, 10 Hz to 200 kHz. */
     static final int DESIGN_POINTS = 19;
+    /** The saturation sweep: from the strongest ambient field up to this field strength, in A/m, in this many fields. */
+    static final double SATURATION_SWEEP_TOP = 1e5;
+    static final int SATURATION_SWEEP_POINTS = 9;
     /** The SE chart's size in pixels. */
     static final int CHART_WIDTH = 1000;
     static final int CHART_HEIGHT = 680;
@@ -141,12 +165,13 @@ public final class DesignStudy {
      * @param name       what it is
      * @param massGrams  its mass
      * @param solved     true for the solver's finite shields, false for infinite-sheet comparisons
-     * @param seAt       SE in dB with its discretisation estimate at a frequency in Hz
+     * @param seAt       SE in dB with its discretisation estimate at a frequency in Hz, and for a can the
+     *                   worse direction there
      * @param bodies     the bodies as a design file holds them (finite shields), or null
-     * @param evaluation the solver evaluation at the charger's frequencies (or the can's), or null
+     * @param evaluation the solver evaluation at the charger's frequencies (or the can's, both directions), or null
      * @param material   a can's material, or null
      */
-    record Candidate(String kind, String name, double massGrams, boolean solved, DoubleFunction<EstimatedValue> seAt,
+    record Candidate(String kind, String name, double massGrams, boolean solved, DoubleFunction<Sample> seAt,
                      List<DesignBody> bodies, ShieldingModel<?> evaluation, Material material) {
 
         Arrangement arrangement() {
@@ -158,8 +183,19 @@ public final class DesignStudy {
         }
     }
 
-    /** A candidate with its SE at every frequency of the study and its margin per band. */
-    record Evaluated(Candidate candidate, double[] seDb, double[] estimateDb, List<Margin> margins) {
+    /**
+     * The SE of a candidate at one frequency.
+     *
+     * @param se    SE in dB with its discretisation estimate
+     * @param worse for a can, the direction of the applied field that gave that SE (the worse one); null
+     *              for a plate
+     */
+    record Sample(EstimatedValue se, FieldDirection worse) {
+    }
+
+    /** A candidate with its SE (and a can's worse direction) at every frequency of the study and its margin per band. */
+    record Evaluated(Candidate candidate, double[] seDb, double[] estimateDb, FieldDirection[] worse,
+                     List<Margin> margins) {
 
         boolean meets() {
             return margins.stream().allMatch(m -> m.marginDb() >= 0);
@@ -179,8 +215,10 @@ public final class DesignStudy {
      * @param seDb       that SE
      * @param estimateDb its discretisation estimate
      * @param marginDb   SE − required
+     * @param worse      for a can, the direction of the applied field that gave that SE; null for a plate
      */
-    record Margin(Requirement.Entry entry, double hertz, double seDb, double estimateDb, double marginDb) {
+    record Margin(Requirement.Entry entry, double hertz, double seDb, double estimateDb, double marginDb,
+                  FieldDirection worse) {
     }
 
     /**
@@ -193,9 +231,12 @@ public final class DesignStudy {
      * @param recommendedModel the solver evaluation of the recommended design, or null
      * @param worstFrequency   where its margin is smallest, or null
      * @param worstSeDb        its SE there as printed (rounded to 0.01 dB in the report)
+     * @param worseDirection   for a can, the direction of the applied field that gives that SE (the worse
+     *                         one there); null for a plate or if nothing is recommended
      */
     public record Outcome(String recommended, Path designFile, Requirement requirement, Path outputFolder,
-                          ShieldingModel<?> recommendedModel, Frequency worstFrequency, double worstSeDb) {
+                          ShieldingModel<?> recommendedModel, Frequency worstFrequency, double worstSeDb,
+                          FieldDirection worseDirection) {
     }
 
     /**
@@ -237,11 +278,12 @@ public final class DesignStudy {
         candidates.addAll(plate("80 % nickel-iron, 1 mm", List.of(new Sheet(nickelIron, mm(1)))));
         candidates.addAll(plate("Cu 0.5 mm | gap 1 mm | Ni-Fe 0.5 mm", List.of(new Sheet(copper, mm(0.5)),
                 new Sheet(null, mm(1)), new Sheet(nickelIron, mm(0.5)))));
-        // Cans around the sensor in the ambient field, taken along the can's axis.
-        candidates.add(can("Ni-Fe 1 mm, capped, cable hole", nickelIron, mm(1), true));
-        candidates.add(can("Ni-Fe 0.5 mm, capped, cable hole", nickelIron, mm(0.5), true));
-        candidates.add(can("Ni-Fe 1 mm, open tube", nickelIron, mm(1), false));
-        candidates.add(can("aluminium 2 mm, capped, cable hole", aluminium, mm(2), true));
+        // Cans around the sensor in the ambient field, along the can's axis or across it.
+        candidates.add(can("Ni-Fe 1 mm, capped, 6 mm cable hole", nickelIron, mm(1), CABLE_HOLE));
+        candidates.add(can("Ni-Fe 1 mm, capped, 2 mm cable hole", nickelIron, mm(1), SMALL_CABLE_HOLE));
+        candidates.add(can("Ni-Fe 0.5 mm, capped, 6 mm cable hole", nickelIron, mm(0.5), CABLE_HOLE));
+        candidates.add(can("Ni-Fe 1 mm, open tube", nickelIron, mm(1), null));
+        candidates.add(can("aluminium 2 mm, capped, 6 mm cable hole", aluminium, mm(2), CABLE_HOLE));
 
         double[] hz = studyFrequencies(need);
         List<Evaluated> results = evaluate(candidates, hz, need);
@@ -274,11 +316,11 @@ public final class DesignStudy {
         out.println("Written to " + folder.toAbsolutePath() + ": sweeps.csv, " + (best == null ? "" : "chosen-design.json, ")
                 + "se-vs-frequency.png, se-vs-frequency.svg" + (maps.isEmpty() ? "" : ", " + String.join(", ", maps)));
         if (best == null) {
-            return new Outcome(null, null, need, folder, null, null, Double.NaN);
+            return new Outcome(null, null, need, folder, null, null, Double.NaN, null);
         }
         Margin w = best.worst();
         return new Outcome(best.candidate().label(), design, need, folder, best.candidate().evaluation(),
-                Frequency.ofHertz(w.hertz()), w.seDb());
+                Frequency.ofHertz(w.hertz()), w.seDb(), w.worse());
     }
 
     /**
@@ -300,12 +342,13 @@ public final class DesignStudy {
         benchMap.writeSvg(folder.resolve("field-map-bench.svg"), MAP_WIDTH, MAP_HEIGHT);
         written.add("field-map-bench.png");
         written.add("field-map-bench.svg");
-        if (best != null && best.candidate().evaluation() instanceof AxialFieldShielding can) {
+        if (best != null && best.candidate().evaluation() instanceof WorstDirectionShielding can) {
             Margin w = best.worst();
             Frequency at = Frequency.ofHertz(w.hertz());
             // The study's own requirement is made of source cases, so each entry has its incident field.
             MagneticFluxDensity incident = w.entry().incident().orElseThrow();
-            FieldMapPicture canMap = FieldMapPicture.around(best.candidate().arrangement(), can.at(at), incident)
+            // The map is of the field along the axis, the direction whose field the solver maps.
+            FieldMapPicture canMap = FieldMapPicture.around(best.candidate().arrangement(), can.axial().at(at), incident)
                     .titled("Recommended " + best.candidate().label() + ", in " + incident + " along its axis at "
                             + at + " (illustrative)");
             canMap.writePng(folder.resolve("field-map-can.png"), MAP_WIDTH, MAP_HEIGHT);
@@ -383,39 +426,51 @@ public final class DesignStudy {
                 .withFineness(FINENESS);
         Candidate finite = new Candidate(kind, name + String.format(Locale.ROOT, ", %.0f mm across",
                 2 * PLATE_RADIUS.toMetres() * 1e3), mass, true,
-                hz -> (hz < SOURCE_SPLIT_HZ ? far : near).at(Frequency.ofHertz(hz)).insertionLossEstimated(),
+                hz -> new Sample((hz < SOURCE_SPLIT_HZ ? far : near).at(Frequency.ofHertz(hz)).insertionLossEstimated(),
+                        null),
                 nearBodies, near, null);
         Barrier barrier = Barrier.of(sheets.stream().map(Sheet::layer).toList());
         CouplingEvaluation sheetNear = coils(true).through(barrier);
         CouplingEvaluation sheetFar = coils(false).through(barrier);
         Candidate sheet = new Candidate(kind, name, mass, false,
-                hz -> new EstimatedValue((hz < SOURCE_SPLIT_HZ ? sheetFar : sheetNear).shieldingEffectivenessDb(hz), 0),
+                hz -> new Sample(new EstimatedValue((hz < SOURCE_SPLIT_HZ ? sheetFar : sheetNear)
+                        .shieldingEffectivenessDb(hz), 0), null),
                 null, sheetNear, null);
         return List.of(finite, sheet);
     }
 
     /**
-     * A can of the study's size around the sensor, in the ambient field taken as uniform and
-     * along the can's axis: capped at both ends with the cable hole in the upper cap, or an
-     * open tube.
+     * A can of the study's size around the sensor, in the ambient field taken as uniform and of
+     * unknown direction, so the worse of a field along the can's axis and one across it counts
+     * at each frequency: capped at both ends with the cable hole in the upper cap, or (hole
+     * null) an open tube.
      */
-    private static Candidate can(String name, Material material, Length wall, boolean capped) {
+    private static Candidate can(String name, Material material, Length wall, Length hole) {
         DesignBody body = DesignBody.can("can", material, CAN_RADIUS, wall, CAN_LENGTH);
-        body = capped ? body.withCapHole(CanEnd.UPPER, CABLE_HOLE) : body.withoutCap(CanEnd.LOWER).withoutCap(CanEnd.UPPER);
-        AxialFieldShielding e = arrangementOf(List.of(body)).inUniformAxialField().sensing(SENSOR).withFineness(FINENESS);
-        return new Candidate("can", name, canMassGrams(material, wall, capped), true,
-                hz -> e.at(Frequency.ofHertz(hz)).worstShieldingDb(), List.of(body), e, material);
+        body = hole != null ? body.withCapHole(CanEnd.UPPER, hole) : body.withoutCap(CanEnd.LOWER).withoutCap(CanEnd.UPPER);
+        Arrangement a = arrangementOf(List.of(body));
+        WorstDirectionShielding e = WorstDirectionShielding.of(
+                a.inUniformAxialField().sensing(SENSOR).withFineness(CAN_FINENESS),
+                a.inUniformTransverseField().sensing(SENSOR).withFineness(CAN_FINENESS));
+        return new Candidate("can", name, canMassGrams(material, wall, hole), true, hz -> worse(e.at(Frequency.ofHertz(hz))),
+                List.of(body), e, material);
     }
 
-    /** A can's mass: the tube between the caps, two caps, less the cable hole (or an open tube). */
-    static double canMassGrams(Material material, Length wall, boolean capped) {
+    /** The worse direction's SE, its estimate and the direction (axial on a tie, as the solution says). */
+    private static Sample worse(WorstDirectionSolution s) {
+        FieldDirection d = s.worstDirection();
+        return new Sample(d == FieldDirection.AXIAL ? s.axial().worstShieldingDb() : s.transverse().worstShieldingDb(), d);
+    }
+
+    /** A can's mass: the tube between the caps, two caps, less the cable hole (or, hole null, an open tube). */
+    static double canMassGrams(Material material, Length wall, Length hole) {
         double a = CAN_RADIUS.toMetres();
         double w = wall.toMetres();
         double l = CAN_LENGTH.toMetres();
         double outer = Math.PI * (a + w) * (a + w);
-        double volume = capped
+        double volume = hole != null
                 ? (outer - Math.PI * a * a) * (l - 2 * w) + 2 * outer * w
-                        - Math.PI * CABLE_HOLE.toMetres() * CABLE_HOLE.toMetres() * w
+                        - Math.PI * hole.toMetres() * hole.toMetres() * w
                 : (outer - Math.PI * a * a) * l;
         return volume * material.density().toKilogramsPerCubicMetre() * 1000;
     }
@@ -444,7 +499,7 @@ public final class DesignStudy {
     /** Every candidate at every frequency, on all cores, the slowest solves first. */
     private static List<Evaluated> evaluate(List<Candidate> candidates, double[] hz, Requirement need) {
         int n = candidates.size();
-        EstimatedValue[][] values = new EstimatedValue[n][hz.length];
+        Sample[][] values = new Sample[n][hz.length];
         ExecutorService pool = Executors.newFixedThreadPool(Runtime.getRuntime().availableProcessors());
         try {
             List<Future<?>> jobs = new ArrayList<>();
@@ -481,23 +536,25 @@ public final class DesignStudy {
         for (int i = 0; i < n; i++) {
             double[] se = new double[hz.length];
             double[] est = new double[hz.length];
+            FieldDirection[] worse = new FieldDirection[hz.length];
             for (int j = 0; j < hz.length; j++) {
-                se[j] = values[i][j].value();
-                est[j] = values[i][j].estimate();
+                se[j] = values[i][j].se().value();
+                est[j] = values[i][j].se().estimate();
+                worse[j] = values[i][j].worse();
             }
             List<Margin> margins = new ArrayList<>();
             for (Requirement.Entry e : need.entries()) {
                 Margin worst = null;
                 for (double f : bandSamples(e.band())) {
                     int j = Arrays.binarySearch(hz, f);
-                    Margin m = new Margin(e, f, se[j], est[j], se[j] - e.requiredDb());
+                    Margin m = new Margin(e, f, se[j], est[j], se[j] - e.requiredDb(), worse[j]);
                     if (worst == null || m.marginDb() < worst.marginDb()) {
                         worst = m;
                     }
                 }
                 margins.add(worst);
             }
-            out.add(new Evaluated(candidates.get(i), se, est, List.copyOf(margins)));
+            out.add(new Evaluated(candidates.get(i), se, est, worse, List.copyOf(margins)));
         }
         return out;
     }
@@ -516,12 +573,14 @@ public final class DesignStudy {
         out.println("  the transformer's field below 1 kHz, the charger's above;");
         out.println(String.format(Locale.ROOT, "- cans of %.0f mm inner radius, %.0f mm long, around the sensor (a cylinder 3 mm in",
                 CAN_RADIUS.toMetres() * 1e3, CAN_LENGTH.toMetres() * 1e3));
-        out.println(String.format(Locale.ROOT, "  radius, 10 mm long): capped with a %.0f mm cable hole in one cap, or open; in the",
-                2 * CABLE_HOLE.toMetres() * 1e3));
-        out.println("  locally uniform ambient field along the can's axis (the worst point of the sensor counts).");
-        out.println(String.format(Locale.ROOT, "Mesh fineness %.1f; each SE carries its discretisation estimate (±). Bands are",
-                FINENESS));
-        out.println("sampled at their ends and centre. Materials from the built-in catalogue at 20 °C.");
+        out.println(String.format(Locale.ROOT, "  radius, 10 mm long): capped with a %.0f mm or %.0f mm cable hole in one cap, or",
+                2 * CABLE_HOLE.toMetres() * 1e3, 2 * SMALL_CABLE_HOLE.toMetres() * 1e3));
+        out.println("  open; in the locally uniform ambient field, whose direction is not known: the worse of a");
+        out.println("  field along the can's axis and one across it counts, at the worst point of the sensor.");
+        out.println(String.format(Locale.ROOT, "Mesh fineness %.2g for plates, %.2g for cans; each SE carries its discretisation",
+                FINENESS, CAN_FINENESS));
+        out.println("estimate (±). Bands are sampled at their ends and centre. Materials from the built-in");
+        out.println("catalogue at 20 °C.");
         out.println();
         out.println("Required shielding per band");
         out.println(String.format(Locale.ROOT, "  %-22s %12s %12s %10s", "band", "incident", "tolerated",
@@ -539,28 +598,38 @@ public final class DesignStudy {
         sorted.sort(Comparator.comparing((Evaluated e) -> !e.meets())
                 .thenComparingDouble(e -> e.candidate().massGrams()));
         out.println("Candidates computed by the solver, meeting designs first, lightest first within each group");
-        out.println(String.format(Locale.ROOT, "  %-5s %-50s %7s %18s %10s %10s  %s", "kind", "design", "mass",
-                "SE at worst", "margin", "worst at", "meets"));
+        out.println(String.format(Locale.ROOT, "  %-5s %-50s %7s %18s %10s %10s %-10s  %s", "kind", "design", "mass",
+                "SE at worst", "margin", "worst at", "direction", "meets"));
         Evaluated best = null;
         for (Evaluated e : sorted) {
             Margin w = e.worst();
-            out.println(String.format(Locale.ROOT, "  %-5s %-50s %5.0f g %8.2f ± %4.2f dB %7.1f dB %10s  %s",
+            out.println(String.format(Locale.ROOT, "  %-5s %-50s %5.0f g %8.2f ± %4.2f dB %7.1f dB %10s %-10s  %s",
                     e.candidate().kind(), e.candidate().name(), e.candidate().massGrams(), w.seDb(), w.estimateDb(),
-                    w.marginDb(), Frequency.ofHertz(w.hertz()), e.meets() ? "yes" : "no"));
+                    w.marginDb(), Frequency.ofHertz(w.hertz()), directionWord(w.worse()), e.meets() ? "yes" : "no"));
             if (best == null && e.meets()) {
                 best = e;
             }
         }
+        out.println("  (direction: for a can, the direction of the ambient field that gives the SE shown, the worse");
+        out.println("  of along the axis and across it; a field at an angle can read up to 3 dB lower at a point.)");
         out.println();
         if (best == null) {
             out.println("No candidate meets the requirement: add thickness, a second layer or a closed can.");
         } else {
             Margin w = best.worst();
             out.println(String.format(Locale.ROOT, "Recommended: %s, %.0f g: worst margin %.1f dB at %s, where the "
-                    + "solver gives SE %.2f ± %.2f dB.", best.candidate().label(), best.candidate().massGrams(),
-                    w.marginDb(), Frequency.ofHertz(w.hertz()), w.seDb(), w.estimateDb()));
+                    + "solver gives SE %.2f ± %.2f dB%s.", best.candidate().label(), best.candidate().massGrams(),
+                    w.marginDb(), Frequency.ofHertz(w.hertz()), w.seDb(), w.estimateDb(),
+                    w.worse() == null ? "" : w.worse() == FieldDirection.AXIAL
+                            ? " with the field along its axis, the worse direction there"
+                            : " with the field across its axis, the worse direction there"));
         }
         return best;
+    }
+
+    /** A can's worse direction in the ranking, "-" for a plate. */
+    private static String directionWord(FieldDirection d) {
+        return d == null ? "-" : d == FieldDirection.AXIAL ? "axial" : "transverse";
     }
 
     private static void printSheetComparison(PrintStream out, List<Evaluated> sheets, List<Evaluated> solved,
@@ -581,7 +650,12 @@ public final class DesignStudy {
         }
     }
 
-    /** The solver's static saturation check of the recommended can in the strongest ambient field. */
+    /**
+     * The solver's static saturation check of the recommended can in the strongest ambient
+     * field, and the onset of saturation from a static sweep of the applied field: the body and
+     * the applied field at which its wall reaches 80 % of its saturation flux density. Both in
+     * a field along the axis (the saturation study's direction).
+     */
     private static void printSaturation(PrintStream out, Evaluated best, Requirement need) {
         if (best == null || !best.candidate().kind().equals("can")) {
             return;
@@ -599,32 +673,45 @@ public final class DesignStudy {
             out.println("Saturation: the recommended can is not ferromagnetic; no saturation check needed.");
             return;
         }
-        SaturationSolution s = SaturationStudy.of(best.candidate().arrangement().inUniformAxialField().sensing(SENSOR))
-                .withCurve(can.name(), MagnetizationCurves.builtIn().get(material.id())).withFineness(FINENESS)
-                .magnetostatic(MagneticFieldStrength.from(strongest));
+        SaturationStudy study = SaturationStudy.of(best.candidate().arrangement().inUniformAxialField().sensing(SENSOR))
+                .withCurve(can.name(), MagnetizationCurves.builtIn().get(material.id())).withFineness(FINENESS);
+        MagneticFieldStrength ambient = MagneticFieldStrength.from(strongest);
+        SaturationSolution s = study.magnetostatic(ambient);
         double peak = s.peakFluxDensity(can.name()).toTesla();
-        out.println(String.format(Locale.ROOT, "Saturation (solver, static, the catalogue's B-H curve, the strongest "
-                + "ambient field, %s, held static):%n  the can's wall carries at most %.3g mT, %s.", strongest, peak * 1e3,
-                s.isNearSaturation(can.name()) ? "WARNING: near saturation, thicken the wall"
-                        : "far from saturation"));
+        out.println(String.format(Locale.ROOT, "Saturation (solver, static, the catalogue's B-H curve, the field along "
+                + "the axis):%n  in the strongest ambient field, %s held static, body '%s' carries at most %.3g mT, %s.",
+                strongest, can.name(), peak * 1e3, s.isNearSaturation(can.name())
+                        ? "WARNING: near saturation, thicken the wall" : "far from saturation"));
+        MagneticFieldStrength top = MagneticFieldStrength.ofAmperesPerMetre(SATURATION_SWEEP_TOP);
+        Optional<SaturationOnset> onset = study.sweep(ambient, top, SATURATION_SWEEP_POINTS).onset();
+        out.println(String.format(Locale.ROOT, "  Onset of saturation (static sweep, %d fields from %s to %s):",
+                SATURATION_SWEEP_POINTS, strongest, top));
+        out.println(onset.map(o -> String.format(Locale.ROOT, "  %s,%n  %s.", o, o.belowSweep()
+                        ? "WARNING: already in the strongest ambient field"
+                        : String.format(Locale.ROOT, "about %s times the strongest ambient field",
+                                new BigDecimal(o.applied().toAmperesPerMetre() / ambient.toAmperesPerMetre())
+                                        .round(new MathContext(2)).toPlainString())))
+                .orElse(String.format(Locale.ROOT, "  no body reaches %.0f %% of its saturation flux density.",
+                        100 * SaturationStudy.THRESHOLD)));
     }
 
     /**
      * Writes the recommended design as a whole design (version 3 of the design file): the
-     * can and the sensor region in the ambient field, or the plate between the charger coil
-     * and the sensor, with every band of the requirement as a source case and the study's mesh
-     * fineness, so that the file evaluates to the numbers the study printed.
+     * can and the sensor region in the ambient field of either direction ({@code "worst"}), or
+     * the plate between the charger coil and the sensor, with every band of the requirement as
+     * a source case and the study's mesh fineness, so that the file evaluates to the numbers
+     * the study printed.
      */
     private static void writeDesign(Evaluated best, Requirement need, Path file) throws IOException {
         Candidate c = best.candidate();
         FrequencyBand band = FrequencyBand.of(Hz(10), kHz(200));
         AxisymmetricDesign d = c.kind().equals("can")
-                ? AxisymmetricDesign.inUniformAxialField(c.bodies(), DesignSensor.cylinder(mm(3), mm(10)), band,
-                        DESIGN_POINTS)
+                ? AxisymmetricDesign.inUniformField(c.bodies(), DesignSensor.cylinder(mm(3), mm(10)),
+                        DesignFieldDirection.WORST, band, DESIGN_POINTS).withFineness(CAN_FINENESS)
                 : AxisymmetricDesign.betweenCoils(c.bodies(), DesignCoil.loop(CHARGER.radius(), CHARGER.turns()),
                         DesignCoil.loop(SENSOR_LOOP.radius(), SENSOR_LOOP.turns()), CHARGER_DISTANCE, band,
-                        DESIGN_POINTS);
-        WholeDesignFile.write(WholeDesign.of(d.withFineness(FINENESS).meeting(need)
+                        DESIGN_POINTS).withFineness(FINENESS);
+        WholeDesignFile.write(WholeDesign.of(d.meeting(need)
                 .withTitle(c.label() + " (magnetometer board study)")), file);
     }
 
@@ -632,20 +719,22 @@ public final class DesignStudy {
         out.println();
         out.println("Cautions");
         out.println("  These are estimates for idealised geometry: bodies of revolution on one axis, the field");
-        out.println("  along it. Real shields are limited by seams, openings, fasteners and fields across the");
-        out.println("  axis; verify by measurement (IEEE Std 299 for enclosures, ASTM D4935 for planar");
-        out.println("  materials). High-permeability alloys lose permeability when bent or drilled after");
-        out.println("  annealing and saturate in strong fields. Mains transformers and chargers carry hazardous");
-        out.println("  voltages; strong alternating fields heat plates and cans and have exposure limits");
-        out.println("  (ICNIRP, IEEE C95.1). Medical, safety and compliance work must follow local codes and");
-        out.println("  licensed, qualified practice.");
+        out.println("  uniform along it or across it (at an angle it can read up to 3 dB lower at a point). Real");
+        out.println("  shields are limited by seams, openings and fasteners; verify by measurement (IEEE Std 299");
+        out.println("  for enclosures, ASTM D4935 for planar materials). High-permeability alloys lose");
+        out.println("  permeability when bent or drilled after annealing, and saturate in strong fields; their");
+        out.println("  B-H curves depend on anneal, stress and temperature. Mains transformers and chargers");
+        out.println("  carry hazardous voltages; strong alternating fields heat plates and cans and have");
+        out.println("  exposure limits (ICNIRP, IEEE C95.1). Medical, safety and compliance work must follow");
+        out.println("  local codes and licensed, qualified practice.");
     }
 
     private static void writeCsv(Path file, double[] hz, List<Evaluated> results) throws IOException {
         StringBuilder s = new StringBuilder("frequency_hz");
         for (Evaluated e : results) {
-            s.append(",\"").append(e.candidate().label()).append(e.candidate().solved() ? " (SE dB)\""
-                    : " (infinite sheet, comparison only, SE dB)\"");
+            s.append(",\"").append(e.candidate().label()).append(!e.candidate().solved()
+                    ? " (infinite sheet, comparison only, SE dB)\""
+                    : e.candidate().kind().equals("can") ? " (worse direction, SE dB)\"" : " (SE dB)\"");
         }
         s.append('\n');
         for (int i = 0; i < hz.length; i++) {

@@ -10,14 +10,22 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import io.shieldmath.shield.axisymmetric.Arrangement;
 import io.shieldmath.shield.axisymmetric.Body;
 import io.shieldmath.shield.axisymmetric.CanEnd;
+import io.shieldmath.shield.axisymmetric.FieldDirection;
+import io.shieldmath.shield.axisymmetric.SaturationOnset;
+import io.shieldmath.shield.axisymmetric.SaturationStudy;
 import io.shieldmath.shield.axisymmetric.SensorRegion;
+import io.shieldmath.shield.axisymmetric.WorstDirectionShielding;
+import io.shieldmath.shield.axisymmetric.WorstDirectionSolution;
 import io.shieldmath.shield.axisymmetric.files.AxisymmetricDesign;
+import io.shieldmath.shield.axisymmetric.files.DesignFieldDirection;
 import io.shieldmath.shield.axisymmetric.files.WholeDesign;
 import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
 import io.shieldmath.shield.design.Requirement;
 import io.shieldmath.shield.materials.Catalogue;
-import io.shieldmath.shield.model.ShieldingModel;
+import io.shieldmath.shield.materials.MagnetizationCurves;
 import io.shieldmath.shield.quantity.Length;
+import io.shieldmath.shield.quantity.MagneticFieldStrength;
+import io.shieldmath.shield.quantity.MagneticFluxDensity;
 import io.shieldmath.shield.cli.BatchCommand;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
@@ -28,6 +36,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -84,17 +93,28 @@ class DesignStudyTest {
         assertNotNull(outcome.recommended(), report);
         assertTrue(outcome.recommended().startsWith("can: "), outcome::recommended);
         assertTrue(report.contains("Recommended: " + outcome.recommended()), report);
-        // The can rebuilt here from the public API with the study's stated geometry and mesh:
-        // the solver's contract is bit-identical results for equal inputs.
+        // The can rebuilt here from the public API with the study's stated geometry and mesh, in
+        // a field of either direction: the solver's contract is bit-identical results for equal inputs.
         Catalogue c = Catalogue.builtIn();
-        ShieldingModel<?> rebuilt = Arrangement.of(Body.can("can", c.get("nickel-iron-80"), Length.ofMillimetres(15),
-                        Length.ofMillimetres(1), Length.ofMillimetres(60)).withCapHole(CanEnd.UPPER, Length.ofMillimetres(3)))
-                .inUniformAxialField().sensing(SensorRegion.cylinder(Length.ofMillimetres(3), Length.ofMillimetres(10)))
-                .withFineness(DesignStudy.FINENESS);
+        Arrangement can = Arrangement.of(Body.can("can", c.get("nickel-iron-80"), Length.ofMillimetres(15),
+                Length.ofMillimetres(1), Length.ofMillimetres(60)).withCapHole(CanEnd.UPPER, Length.ofMillimetres(1)));
+        SensorRegion sensor = SensorRegion.cylinder(Length.ofMillimetres(3), Length.ofMillimetres(10));
+        WorstDirectionShielding rebuilt = WorstDirectionShielding.of(
+                can.inUniformAxialField().sensing(sensor).withFineness(DesignStudy.CAN_FINENESS),
+                can.inUniformTransverseField().sensing(sensor).withFineness(DesignStudy.CAN_FINENESS));
         assertEquals(rebuilt, outcome.recommendedModel(), "the study's recommendation is not the can it states");
         double se = rebuilt.shieldingEffectivenessDb(outcome.worstFrequency().toHertz());
         assertEquals(outcome.worstSeDb(), se, 0);
         assertTrue(report.contains(String.format(Locale.ROOT, "SE %.2f ± ", se)), report);
+        // The report names the worse direction there, as the solver finds it.
+        WorstDirectionSolution there = rebuilt.at(outcome.worstFrequency());
+        assertEquals(there.worstDirection(), outcome.worseDirection());
+        assertEquals(Math.min(there.axial().shieldingEffectivenessDb(), there.transverse().shieldingEffectivenessDb()), se,
+                0);
+        assertTrue(report.contains(String.format(Locale.ROOT, "SE %.2f ± %.2f dB with the field %s its axis, the worse "
+                + "direction there.", se, (outcome.worseDirection() == FieldDirection.AXIAL ? there.axial().worstShieldingDb()
+                : there.transverse().worstShieldingDb()).estimate(),
+                outcome.worseDirection() == FieldDirection.AXIAL ? "along" : "across")), report);
         // Where its margin is smallest it still meets the band's required SE.
         Requirement.Entry band = outcome.requirement().entries().stream()
                 .filter(e -> e.band().contains(outcome.worstFrequency())).findFirst().orElseThrow();
@@ -107,6 +127,9 @@ class DesignStudyTest {
         assertEquals(WholeDesign.Kind.AXISYMMETRIC, d.kind());
         AxisymmetricDesign a = d.axisymmetric().orElseThrow();
         assertEquals(outcome.recommendedModel(), a.model(), "the file must hold the can, its hole, sensor and mesh");
+        assertEquals(Optional.of(DesignFieldDirection.WORST), a.fieldDirection());
+        assertTrue(Files.readString(outcome.designFile()).contains("\"direction\" : \"worst\""),
+                "the file must say the field's direction is the worse of the two");
         assertEquals(outcome.requirement(), a.requirement(), "the file must hold every source case");
         // The library on the file gives the study's number, bit for bit (equal inputs, equal results).
         assertEquals(outcome.worstSeDb(), d.model().shieldingEffectivenessDb(outcome.worstFrequency().toHertz()), 0);
@@ -129,6 +152,9 @@ class DesignStudyTest {
         double batch = Double.parseDouble(row[header.indexOf("se_db")]);
         // The batch writes six decimals: the study's number to that rounding, and the report's two decimals.
         assertEquals(outcome.worstSeDb(), batch, 5e-7, csv);
+        // and it names the same worse direction as the study
+        assertEquals(outcome.worseDirection() == FieldDirection.AXIAL ? "axial" : "transverse",
+                row[header.indexOf("worse_direction")], csv);
         assertTrue(report.contains(String.format(Locale.ROOT, "SE %.2f ± ", batch)), report);
         // The README's quick start shows this very exchange.
         assertTrue(readme().contains(lines.get(1)), "README does not show the batch line " + lines.get(1));
@@ -144,11 +170,33 @@ class DesignStudyTest {
         int from = readme.indexOf("## Quick start");
         String quick = readme.substring(from, readme.indexOf("\n## ", from + 1));
         List<String> shown = quick.lines().filter(l -> l.startsWith("  can ") || l.startsWith("  plate ")
-                || l.startsWith("Recommended: ")).toList();
+                || l.startsWith("Recommended: ") || l.startsWith("  body ")).toList();
         assertTrue(shown.size() >= 4, quick);
         for (String line : shown) {
             assertTrue(report.contains(line), "README shows a line the study no longer prints: " + line);
         }
+    }
+
+    @Test
+    void theSaturationCheckNamesTheBodyAndTheFieldAtWhichItSaturates() {
+        // The study's onset, rebuilt from the public API: the recommended can (a 2 mm cable hole) in a
+        // static field along its axis, the catalogue's curve, swept from the strongest ambient field.
+        Arrangement can = Arrangement.of(Body.can("can", Catalogue.builtIn().get("nickel-iron-80"),
+                Length.ofMillimetres(15), Length.ofMillimetres(1), Length.ofMillimetres(60))
+                .withCapHole(CanEnd.UPPER, Length.ofMillimetres(1)));
+        SaturationOnset onset = SaturationStudy.of(can.inUniformAxialField()
+                        .sensing(SensorRegion.cylinder(Length.ofMillimetres(3), Length.ofMillimetres(10))))
+                .withCurve("can", MagnetizationCurves.builtIn().get("nickel-iron-80")).withFineness(DesignStudy.FINENESS)
+                .sweep(MagneticFieldStrength.from(MagneticFluxDensity.ofMicrotesla(8)),
+                        MagneticFieldStrength.ofAmperesPerMetre(DesignStudy.SATURATION_SWEEP_TOP),
+                        DesignStudy.SATURATION_SWEEP_POINTS)
+                .onset().orElseThrow();
+        assertEquals("can", onset.body());
+        String text = onset.toString();
+        assertTrue(text.startsWith("body 'can' reaches 80 % of its saturation flux density"), text);
+        assertTrue(report.contains(text), "the report must name the body and the field: " + text + "\n" + report);
+        assertTrue(report.contains("in the strongest ambient field, 8 µT held static, body 'can' carries at most"),
+                report);
     }
 
     @Test

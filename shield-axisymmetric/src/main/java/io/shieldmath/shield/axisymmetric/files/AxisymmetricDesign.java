@@ -7,6 +7,8 @@ import io.shieldmath.shield.axisymmetric.Arrangement;
 import io.shieldmath.shield.axisymmetric.AxialFieldShielding;
 import io.shieldmath.shield.axisymmetric.Body;
 import io.shieldmath.shield.axisymmetric.CoilCoupling;
+import io.shieldmath.shield.axisymmetric.TransverseFieldShielding;
+import io.shieldmath.shield.axisymmetric.WorstDirectionShielding;
 import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.coupling.CoilPair;
 import io.shieldmath.shield.design.Requirement;
@@ -25,9 +27,9 @@ import java.util.Optional;
 
 /**
  * A whole axisymmetric design: finite bodies of revolution on one axis, either between a
- * transmitter and a receiver coil or in a uniform axial applied field read over a sensor
- * region, the band and number of points to evaluate, the mesh tolerance, and every source
- * case the design must meet.
+ * transmitter and a receiver coil or in a uniform applied field read over a sensor region
+ * (along the axis, across it, or the worse of the two), the band and number of points to
+ * evaluate, the mesh tolerance, and every source case the design must meet.
  *
  * <pre>{@code
  * Catalogue cat = Catalogue.builtIn();
@@ -43,9 +45,12 @@ import java.util.Optional;
  * }</pre>
  *
  * <p>{@link #model()} is the evaluation behind the common contract: a {@link CoilCoupling}
- * (insertion loss between the coils) or an {@link AxialFieldShielding} (the worst shielding
- * over the sensor region). Results are estimates for idealised geometry and must be verified
- * by measurement.
+ * (insertion loss between the coils), or the worst shielding over the sensor region in the
+ * applied field's {@link DesignFieldDirection direction}: an {@link AxialFieldShielding}, a
+ * {@link TransverseFieldShielding}, or a {@link WorstDirectionShielding} of both (use
+ * {@link #inUniformField(List, DesignSensor, DesignFieldDirection, FrequencyBand, int)} with
+ * {@link DesignFieldDirection#WORST} when the field's direction is not known). Results are
+ * estimates for idealised geometry and must be verified by measurement.
  *
  * <p>Immutable and thread-safe; equality is by value, the texts a design read from a file gave
  * its quantities in included. The {@code with…} and {@code meeting} methods return a copy.
@@ -67,6 +72,7 @@ public final class AxisymmetricDesign {
     private final CurrentAmplitude drive;
     private final AmplitudeMeasure driveMeasure;
     private final DesignSensor sensor;
+    private final DesignFieldDirection direction;
     private final MagneticFluxDensity applied;
     private final Decibels tolerance;
     private final double fineness;
@@ -79,7 +85,8 @@ public final class AxisymmetricDesign {
 
     private AxisymmetricDesign(String title, List<DesignBody> bodies, DesignCoil transmitter, DesignCoil receiver,
                                Length separation, CurrentAmplitude drive,
-                               AmplitudeMeasure driveMeasure, DesignSensor sensor, MagneticFluxDensity applied,
+                               AmplitudeMeasure driveMeasure, DesignSensor sensor, DesignFieldDirection direction,
+                               MagneticFluxDensity applied,
                                Decibels tolerance, double fineness, FrequencyBand band, int points,
                                Requirement requirement,
                                Spelling spelling, Arrangement arrangement, CoilPair coils, ShieldingModel<?> model) {
@@ -93,6 +100,7 @@ public final class AxisymmetricDesign {
         this.drive = drive;
         this.driveMeasure = driveMeasure;
         this.sensor = sensor;
+        this.direction = direction;
         this.applied = applied;
         this.tolerance = tolerance;
         this.fineness = fineness;
@@ -111,9 +119,23 @@ public final class AxisymmetricDesign {
             c = fineness == DEFAULT_FINENESS ? c : c.withFineness(fineness);
             return tolerance == null ? c : c.withTolerance(tolerance);
         }
-        AxialFieldShielding s = arrangement.inUniformAxialField().sensing(sensor.region());
-        s = fineness == DEFAULT_FINENESS ? s : s.withFineness(fineness);
-        return tolerance == null ? s : s.withTolerance(tolerance);
+        AxialFieldShielding axial = null;
+        TransverseFieldShielding transverse = null;
+        if (direction != DesignFieldDirection.TRANSVERSE) {
+            axial = arrangement.inUniformAxialField().sensing(sensor.region());
+            axial = fineness == DEFAULT_FINENESS ? axial : axial.withFineness(fineness);
+            axial = tolerance == null ? axial : axial.withTolerance(tolerance);
+        }
+        if (direction != DesignFieldDirection.AXIAL) {
+            transverse = arrangement.inUniformTransverseField().sensing(sensor.region());
+            transverse = fineness == DEFAULT_FINENESS ? transverse : transverse.withFineness(fineness);
+            transverse = tolerance == null ? transverse : transverse.withTolerance(tolerance);
+        }
+        return switch (direction) {
+            case AXIAL -> axial;
+            case TRANSVERSE -> transverse;
+            case WORST -> WorstDirectionShielding.of(axial, transverse);
+        };
     }
 
     private static Arrangement arrangementOf(List<DesignBody> bodies) {
@@ -155,13 +177,14 @@ public final class AxisymmetricDesign {
         List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
         return checked(new AxisymmetricDesign("", b, Require.nonNull("transmitter", transmitter),
                 Require.nonNull("receiver", receiver), Require.nonNull("separation", separation), null, null, null,
-                null, null, DEFAULT_FINENESS,
+                null, null, null, DEFAULT_FINENESS,
                 Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
     /**
      * A design of bodies in a uniform axial applied field, evaluated as the worst shielding
-     * over the sensor region.
+     * over the sensor region: {@link #inUniformField(List, DesignSensor, DesignFieldDirection,
+     * FrequencyBand, int)} with {@link DesignFieldDirection#AXIAL}.
      *
      * @param bodies the bodies, none null, with different names and not overlapping
      * @param sensor where the field is read, not null
@@ -173,15 +196,37 @@ public final class AxisymmetricDesign {
      */
     public static AxisymmetricDesign inUniformAxialField(List<DesignBody> bodies, DesignSensor sensor,
                                                          FrequencyBand band, int points) {
+        return inUniformField(bodies, sensor, DesignFieldDirection.AXIAL, band, points);
+    }
+
+    /**
+     * A design of bodies in a uniform applied field of the given direction, evaluated as the
+     * worst shielding over the sensor region: along the axis ({@link AxialFieldShielding}),
+     * across it ({@link TransverseFieldShielding}), or the smaller of the two
+     * ({@link WorstDirectionShielding}, both solved at each frequency, so it costs an axial and
+     * a transverse solve; with eddy currents the transverse one is the dearer).
+     *
+     * @param bodies    the bodies, none null, with different names and not overlapping
+     * @param sensor    where the field is read, not null
+     * @param direction the applied field's direction, not null
+     * @param band      the band to evaluate, within the quasi-static limit of the geometry, not null
+     * @param points    the number of log-spaced points, 1 to {@value #MAX_POINTS}
+     * @return the design
+     * @throws IllegalArgumentException if bodies share a name or overlap
+     * @throws io.shieldmath.shield.quantity.InvalidQuantityException if the band or points are out of range
+     */
+    public static AxisymmetricDesign inUniformField(List<DesignBody> bodies, DesignSensor sensor,
+                                                    DesignFieldDirection direction, FrequencyBand band, int points) {
         List<DesignBody> b = List.copyOf(Require.nonNull("bodies", bodies));
         return checked(new AxisymmetricDesign("", b, null, null, null, null, null, Require.nonNull("sensor", sensor),
-                null, null, DEFAULT_FINENESS,
+                Require.nonNull("direction", direction), null, null, DEFAULT_FINENESS,
                 Require.nonNull("band", band), points, Requirement.none(), Spelling.DEFAULT, arrangementOf(b), null, null));
     }
 
     private AxisymmetricDesign copy(String t, CurrentAmplitude dr, AmplitudeMeasure dm, MagneticFluxDensity ap,
                                     Decibels tol, Requirement req, Spelling sp) {
-        return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, ap, tol, fineness,
+        return new AxisymmetricDesign(t, bodies, transmitter, receiver, separation, dr, dm, sensor, direction, ap, tol,
+                fineness,
                 band, points, req, sp, arrangement, coils, Objects.equals(tol, tolerance) ? model : null);
     }
 
@@ -234,7 +279,7 @@ public final class AxisymmetricDesign {
     public AxisymmetricDesign withFineness(double q) {
         Require.inRange("mesh fineness", q, 0.25, 16, "(plain number)");
         return new AxisymmetricDesign(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor,
-                applied, tolerance, q, band, points, requirement, spelling, arrangement, coils,
+                direction, applied, tolerance, q, band, points, requirement, spelling, arrangement, coils,
                 q == fineness ? model : null);
     }
 
@@ -291,8 +336,10 @@ public final class AxisymmetricDesign {
     }
 
     /**
-     * The evaluation through the common contract: a {@link CoilCoupling} between the coils or an
-     * {@link AxialFieldShielding} over the sensor region, with the tolerance if one is given.
+     * The evaluation through the common contract: a {@link CoilCoupling} between the coils, or
+     * over the sensor region an {@link AxialFieldShielding}, a {@link TransverseFieldShielding}
+     * or a {@link WorstDirectionShielding} as {@link #fieldDirection()} says, with the tolerance
+     * and fineness if given.
      * Equal designs give equal models, and equal models bit-identical results.
      *
      * @return the model
@@ -392,6 +439,15 @@ public final class AxisymmetricDesign {
     }
 
     /**
+     * The applied field's direction, for a design in an applied field.
+     *
+     * @return the direction, or empty between coils
+     */
+    public Optional<DesignFieldDirection> fieldDirection() {
+        return Optional.ofNullable(direction);
+    }
+
+    /**
      * The applied field's level, if given.
      *
      * @return the flux density, or empty
@@ -441,7 +497,7 @@ public final class AxisymmetricDesign {
         return o instanceof AxisymmetricDesign d && d.title.equals(title) && d.bodies.equals(bodies)
                 && Objects.equals(d.transmitter, transmitter) && Objects.equals(d.receiver, receiver)
                 && Objects.equals(d.separation, separation) && Objects.equals(d.drive, drive) && d.driveMeasure == driveMeasure
-                && Objects.equals(d.sensor, sensor) && Objects.equals(d.applied, applied)
+                && Objects.equals(d.sensor, sensor) && d.direction == direction && Objects.equals(d.applied, applied)
                 && Objects.equals(d.tolerance, tolerance) && Double.compare(d.fineness, fineness) == 0
                 && d.band.equals(band) && d.points == points
                 && d.requirement.equals(requirement) && d.spelling.equals(spelling);
@@ -449,14 +505,24 @@ public final class AxisymmetricDesign {
 
     @Override
     public int hashCode() {
-        return Objects.hash(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor, applied, tolerance, fineness, band,
+        return Objects.hash(title, bodies, transmitter, receiver, separation, drive, driveMeasure, sensor, direction,
+                applied, tolerance, fineness, band,
                 points, requirement, spelling);
+    }
+
+    /** The applied field in words, as {@link #toString()} gives it. */
+    private static String fieldWords(DesignFieldDirection d) {
+        return switch (d) {
+            case AXIAL -> "a uniform axial field";
+            case TRANSVERSE -> "a uniform transverse field";
+            case WORST -> "a uniform field, the worse of axial and transverse";
+        };
     }
 
     @Override
     public String toString() {
         return (title.isEmpty() ? "axisymmetric design" : title) + ": " + bodies
-                + (coils != null ? " between " + coils : " in a uniform axial field, " + sensor) + ", " + band + ", "
+                + (coils != null ? " between " + coils : " in " + fieldWords(direction) + ", " + sensor) + ", " + band + ", "
                 + points + " points" + (tolerance == null ? "" : ", tolerance " + tolerance)
                 + (fineness == DEFAULT_FINENESS ? "" : ", fineness " + fineness)
                 + (requirement.entries().isEmpty() ? "" : ", " + requirement);

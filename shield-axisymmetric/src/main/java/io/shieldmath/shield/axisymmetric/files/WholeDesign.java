@@ -31,7 +31,7 @@ public final class WholeDesign {
         PLANAR,
         /** A closed shell or enclosure with its openings. */
         SHELL,
-        /** Finite bodies of revolution between coils or in an applied axial field. */
+        /** Finite bodies of revolution between coils or in a uniform applied field (axial, transverse or the worse of both). */
         AXISYMMETRIC
     }
 

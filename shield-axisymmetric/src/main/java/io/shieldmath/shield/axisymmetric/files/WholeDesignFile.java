@@ -97,7 +97,13 @@ import tools.jackson.databind.node.ObjectNode;
  *                "drive": { "current": "100 mA", "measure": "rms" } }             (drive optional)
  * </pre>
  * with the transmitter at z = −separation/2; measures are {@code peak}, {@code peak-to-peak}
- * and {@code rms}. The sensor is optional (a point at the centre) and is a point when it has
+ * and {@code rms}. The applied field's {@code direction} is {@code "axial"} (along the axis),
+ * {@code "transverse"} (across it) or {@code "worst"} (both solved, the smaller shielding
+ * counting: the case to design for when the field's direction is not known); see
+ * {@link DesignFieldDirection}. The format's version stays 3: the field was in version 3 from
+ * the start, with {@code "axial"} its only value, and a reader that knows only that value
+ * refuses the others at that field, with its location, rather than misreading them; every
+ * earlier file reads as before. The sensor is optional (a point at the centre) and is a point when it has
  * no radius and length. {@code fineness} is the solver's starting mesh fineness (0.25 to 16,
  * see {@code CoilCoupling.withFineness}), written only when it is not 1. The band must lie
  * within the geometry's quasi-static limit. A design
@@ -240,7 +246,7 @@ public final class WholeDesignFile {
         Node appliedNode = af.optional("appliedField");
         if ((coilsNode == null) == (appliedNode == null)) {
             throw arrangementNode.error("an arrangement has exactly one of \"coils\" (a transmitter and a receiver) "
-                    + "and \"appliedField\" (a uniform axial field)");
+                    + "and \"appliedField\" (a uniform applied field)");
         }
         Node bandNode = f.required("band");
         FrequencyBand band = bandNode.quantity(FrequencyBand::parse, "10 Hz to 1 kHz");
@@ -267,13 +273,10 @@ public final class WholeDesignFile {
             }
         } else {
             Node.Fields pf = appliedNode.object(APPLIED_FIELDS);
-            Node direction = pf.required("direction");
-            if (!direction.string().equals("axial")) {
-                throw direction.error("unknown direction \"" + direction.string() + "\"; known: axial");
-            }
+            DesignFieldDirection direction = direction(pf.required("direction"));
             Node sensorNode = pf.optional("sensor");
             DesignSensor sensor = sensorNode == null ? DesignSensor.point() : readSensor(sensorNode);
-            d = at(bandNode, () -> AxisymmetricDesign.inUniformAxialField(bodies, sensor, band, points));
+            d = at(bandNode, () -> AxisymmetricDesign.inUniformField(bodies, sensor, direction, band, points));
             Node level = pf.optional("fluxDensity");
             if (level != null) {
                 d = d.withAppliedField(level.quantity(MagneticFluxDensity::parse, "40 µT"));
@@ -468,6 +471,16 @@ public final class WholeDesignFile {
         return centre.convert(Length::parse, unsigned);
     }
 
+    private static DesignFieldDirection direction(Node n) {
+        String text = n.string();
+        for (DesignFieldDirection d : DesignFieldDirection.values()) {
+            if (d.fileName().equals(text)) {
+                return d;
+            }
+        }
+        throw n.error("unknown direction \"" + text + "\"; known: axial, transverse, worst");
+    }
+
     private static AmplitudeMeasure measure(Node n) {
         String m = n.string();
         return switch (m) {
@@ -509,7 +522,7 @@ public final class WholeDesignFile {
             }
         } else {
             ObjectNode p = a.putObject("appliedField");
-            p.put("direction", "axial");
+            p.put("direction", d.fieldDirection().get().fileName());
             d.appliedField().ifPresent(b -> p.put("fluxDensity", sp.text(b)));
             DesignSensor s = d.sensor().get();
             if (!s.equals(DesignSensor.point())) {

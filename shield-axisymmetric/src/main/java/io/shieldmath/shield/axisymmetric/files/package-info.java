@@ -4,7 +4,8 @@
 
 /**
  * Whole designs in one file: a planar stack, a closed shell with its openings, or an
- * axisymmetric arrangement of finite bodies between coils or in an applied axial field, each
+ * axisymmetric arrangement of finite bodies between coils or in a uniform applied field (along
+ * the axis, across it, or the worse of the two), each
  * with the band to evaluate and every source case it must meet.
  * {@link io.shieldmath.shield.axisymmetric.files.WholeDesignFile} reads and writes every kind
  * (version 3 of the design format; versions 1 and 2 are still read), and

@@ -346,7 +346,8 @@ final class RandomWholeDesigns {
             }
         } else {
             ObjectNode p = a.putObject("appliedField");
-            p.put("direction", "axial");
+            DesignFieldDirection direction = DesignFieldDirection.values()[r.nextInt(3)];
+            p.put("direction", direction.fileName());
             DesignSensor s = DesignSensor.point();
             if (r.nextBoolean()) {
                 ObjectNode sn = p.putObject("sensor");
@@ -368,7 +369,9 @@ final class RandomWholeDesigns {
             root.put("band", b);
             int points = 1 + r.nextInt(5);
             root.put("points", points);
-            d = AxisymmetricDesign.inUniformAxialField(bodies, s, FrequencyBand.parse(b), points);
+            d = direction == DesignFieldDirection.AXIAL && r.nextBoolean()
+                    ? AxisymmetricDesign.inUniformAxialField(bodies, s, FrequencyBand.parse(b), points)
+                    : AxisymmetricDesign.inUniformField(bodies, s, direction, FrequencyBand.parse(b), points);
             if (r.nextBoolean()) {
                 String level = fluxDensity(logUniform(1e-6, 1e-2));
                 p.put("fluxDensity", level);

@@ -15,6 +15,8 @@ import io.shieldmath.shield.axisymmetric.Body;
 import io.shieldmath.shield.axisymmetric.CanEnd;
 import io.shieldmath.shield.axisymmetric.CoilCoupling;
 import io.shieldmath.shield.axisymmetric.SensorRegion;
+import io.shieldmath.shield.axisymmetric.TransverseFieldShielding;
+import io.shieldmath.shield.axisymmetric.WorstDirectionShielding;
 import io.shieldmath.shield.coupling.AmplitudeMeasure;
 import io.shieldmath.shield.coupling.Coil;
 import io.shieldmath.shield.coupling.CoilPair;
@@ -259,8 +261,43 @@ class WholeDesignFileTest {
         MaterialFileException close = refused(PLATE.replace("\"separation\": \"40 mm\"",
                 "\"separation\": \"2 mm\""));
         assertEquals("$.arrangement.coils.separation", close.path());
-        MaterialFileException direction = refused(CAN.replace("\"axial\"", "\"transverse\""));
+        MaterialFileException direction = refused(CAN.replace("\"axial\"", "\"sideways\""));
         assertEquals("$.arrangement.appliedField.direction", direction.path());
+        assertTrue(direction.getMessage().contains("\"sideways\"; known: axial, transverse, worst"),
+                direction.getMessage());
+        MaterialFileException number = refused(CAN.replace("\"axial\"", "2"));
+        assertEquals("$.arrangement.appliedField.direction", number.path());
+        MaterialFileException missing = refused(CAN.replace("\"direction\": \"axial\", ", ""));
+        assertEquals("$.arrangement.appliedField", missing.path());
+    }
+
+    @Test
+    void theAppliedFieldsDirectionChoosesTheModelAndIsWrittenBack() {
+        AxisymmetricDesign axial = WholeDesignFile.parse(CAN, CAT).axisymmetric().orElseThrow();
+        AxisymmetricDesign across = WholeDesignFile.parse(CAN.replace("\"axial\"", "\"transverse\""), CAT)
+                .axisymmetric().orElseThrow();
+        AxisymmetricDesign worst = WholeDesignFile.parse(CAN.replace("\"axial\"", "\"worst\""), CAT)
+                .axisymmetric().orElseThrow();
+        assertEquals(java.util.Optional.of(DesignFieldDirection.AXIAL), axial.fieldDirection());
+        assertEquals(java.util.Optional.of(DesignFieldDirection.TRANSVERSE), across.fieldDirection());
+        assertEquals(java.util.Optional.of(DesignFieldDirection.WORST), worst.fieldDirection());
+        assertTrue(WholeDesignFile.parse(PLATE, CAT).axisymmetric().orElseThrow().fieldDirection().isEmpty());
+        // Each is the solver's own evaluation of that direction, with the file's sensor and tolerance.
+        Arrangement bodies = axial.arrangement();
+        SensorRegion sensor = axial.sensor().orElseThrow().region();
+        TransverseFieldShielding t = bodies.inUniformTransverseField().sensing(sensor).withTolerance(Decibels.of(0.5));
+        assertEquals(t, across.model());
+        assertEquals(WorstDirectionShielding.of((AxialFieldShielding) axial.model(), t), worst.model());
+        // Only the direction differs, so the designs differ, and each is written back as read.
+        assertFalse(axial.equals(worst));
+        assertFalse(across.equals(worst));
+        for (AxisymmetricDesign d : List.of(axial, across, worst)) {
+            String json = WholeDesignFile.toJson(d);
+            assertTrue(json.contains("\"direction\" : \"" + d.fieldDirection().orElseThrow().fileName() + "\""), json);
+            assertTrue(json.contains("\"version\" : 3"), json);
+            assertEquals(d, WholeDesignFile.parse(json, CAT).axisymmetric().orElseThrow());
+        }
+        assertTrue(worst.toString().contains("the worse of axial and transverse"), worst.toString());
     }
 
     @Test
