@@ -16,10 +16,12 @@ import io.shieldmath.shield.axisymmetric.files.WholeDesign;
 import io.shieldmath.shield.materials.files.Design;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.model.ValidityNote;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
+import java.util.List;
 
 /**
  * How the command evaluates one design of any kind at one frequency, and what it writes: the
@@ -161,12 +163,13 @@ final class DesignEvaluation {
     }
 
     /**
-     * The values of one frequency: the numbers, then the texts.
+     * The values of one frequency: the numbers, then the texts, and the result's validity notes.
      *
      * @param values the numbers, in the order of the numeric columns
      * @param texts  the texts, in the order of {@link #textColumns()}
+     * @param notes  the result's {@link ShieldingResult#validityNotes()}, often empty
      */
-    record Row(double[] values, String[] texts) {
+    record Row(double[] values, String[] texts, List<ValidityNote> notes) {
     }
 
     /**
@@ -181,17 +184,18 @@ final class DesignEvaluation {
     private Row compute(double hz) {
         if (planar != null) {
             PlanarResult r = planar.at(Frequency.ofHertz(hz));
-            return numbers(r.shieldingEffectivenessDb(), r.absorptionDb(), r.reflectionDb(), r.multipleReflectionDb());
+            return numbers(r, r.shieldingEffectivenessDb(), r.absorptionDb(), r.reflectionDb(),
+                    r.multipleReflectionDb());
         }
         ShieldingResult r = model.at(Frequency.ofHertz(hz));
         if (r instanceof CouplingSolution c) {
-            return numbers(c.insertionLossDb(), c.insertionLossEstimateDb());
+            return numbers(r, c.insertionLossDb(), c.insertionLossEstimateDb());
         }
         if (r instanceof AxialFieldSolution a) {
-            return numbers(a.shieldingEffectivenessDb(), a.worstShieldingDb().estimate());
+            return numbers(r, a.shieldingEffectivenessDb(), a.worstShieldingDb().estimate());
         }
         if (r instanceof TransverseFieldSolution t) {
-            return numbers(t.shieldingEffectivenessDb(), t.worstShieldingDb().estimate());
+            return numbers(r, t.shieldingEffectivenessDb(), t.worstShieldingDb().estimate());
         }
         if (r instanceof WorstDirectionSolution w) {
             AxialFieldSolution a = w.axial();
@@ -199,12 +203,12 @@ final class DesignEvaluation {
             boolean axial = w.worstDirection() == FieldDirection.AXIAL;
             double estimate = axial ? a.worstShieldingDb().estimate() : t.worstShieldingDb().estimate();
             return new Row(new double[] {w.shieldingEffectivenessDb(), estimate, a.shieldingEffectivenessDb(),
-                t.shieldingEffectivenessDb()}, new String[] {axial ? "axial" : "transverse"});
+                t.shieldingEffectivenessDb()}, new String[] {axial ? "axial" : "transverse"}, w.validityNotes());
         }
-        return numbers(r.shieldingEffectivenessDb());
+        return numbers(r, r.shieldingEffectivenessDb());
     }
 
-    private static Row numbers(double... values) {
-        return new Row(values, new String[0]);
+    private static Row numbers(ShieldingResult r, double... values) {
+        return new Row(values, new String[0], r.validityNotes());
     }
 }
