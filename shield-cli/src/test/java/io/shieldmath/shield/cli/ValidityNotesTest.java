@@ -16,6 +16,8 @@ import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.Length;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -111,6 +113,10 @@ class ValidityNotesTest {
                 .findFirst().orElseThrow().message();
         assertTrue(noteLines.stream().anyMatch(l -> l.contains(": " + message)), message + " in\n" + r.err());
         assertFalse(r.out().contains("NOT_NEAR_FIELD"), r.out());
+        // The README's batch section shows this very line.
+        String readme = Files.readString(Path.of("..", "README.md"), StandardCharsets.UTF_8);
+        String shown = noteLines.stream().filter(l -> l.contains("NOT_NEAR_FIELD")).findFirst().orElseThrow();
+        assertTrue(readme.contains("\n" + shown + "\n"), "README does not show the line " + shown);
     }
 
     @Test
