@@ -49,8 +49,11 @@ import java.util.Objects;
  *
  * <p>Once a run has taken more than about a second (finite-element solves take from a tenth of
  * a second to several seconds per frequency), a short line per frequency done goes to standard
- * error, such as {@code shield-batch: frequency 3 of 21 (2500 Hz) done, 1.4 s}; standard output
- * holds only the results.
+ * error, such as {@code shield-batch: frequency 3 of 21 (2500 Hz) done, 1.4 s}, and before it, for
+ * an axisymmetric design, one line per mesh of the solver's refinement (a coarse and a fine mesh,
+ * more with a tolerance) with its fineness and unknowns, such as
+ * {@code shield-batch: frequency 3 of 21 (2500 Hz): solving a mesh of fineness 1.00 with 64030 unknowns, 1.9 s};
+ * standard output holds only the results.
  *
  * <p>Validity notes ({@link io.shieldmath.shield.model.ShieldingResult#validityNotes()}: a result
  * computed beyond, or near the edge of, the range where its model holds, such as the textbook
@@ -155,7 +158,8 @@ public final class BatchCommand {
             + "Evaluates a shield design file (JSON) of any kind (planar stack, closed shell, axisymmetric\n"
             + "arrangement) at frequencies and writes CSV or JSON on standard output, units in the column\n"
             + "names; a design in a field of either direction (\"worst\") also names the worse direction.\n"
-            + "A run longer than about a second reports each frequency done on standard error. Validity notes\n"
+            + "A run longer than about a second reports each frequency done, and each mesh the solver refines\n"
+            + "it on, on standard error. Validity notes\n"
             + "(results beyond or near their model's limits) are summarised on standard error after the run,\n"
             + "one line per note with its frequencies; in JSON each result with notes has \"validity_notes\".\n\n"
             + "  --design FILE     the design file (\"format\": \"shield-design\")\n"
@@ -281,10 +285,12 @@ public final class BatchCommand {
                 int points = o.points() > 0 ? o.points() : design.points();
                 double[] all = b.logSpacedHertz(points);
                 for (int i = 0; i < all.length; i++) {
-                    DesignEvaluation.Row row = evaluation.row(all[i]);
+                    String what = "frequency " + (i + 1) + " of " + all.length;
+                    double hz = all[i];
+                    DesignEvaluation.Row row = evaluation.row(hz, (q, n) -> progress.mesh(what, hz, q, n));
                     output.write(all[i], row.values(), row.texts(), row.notes());
                     notes.add(all[i], row.notes());
-                    progress.done("frequency " + (i + 1) + " of " + all.length, all[i]);
+                    progress.done(what, hz);
                 }
             }
             output.finish();
@@ -318,7 +324,9 @@ public final class BatchCommand {
             DesignEvaluation.Row result;
             try {
                 hz = frequencyHertz(s, evaluation.lowHz(), evaluation.highHz());
-                result = evaluation.row(hz);
+                String what = "standard input line " + lines.lineNumber();
+                double at = hz;
+                result = evaluation.row(hz, (q, n) -> progress.mesh(what, at, q, n));
             } catch (CommandFailure f) {
                 if (f.exitCode() != BAD_INPUT) {
                     throw f;

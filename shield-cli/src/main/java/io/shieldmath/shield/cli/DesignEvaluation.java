@@ -13,6 +13,7 @@ import io.shieldmath.shield.axisymmetric.WorstDirectionSolution;
 import io.shieldmath.shield.axisymmetric.files.AxisymmetricDesign;
 import io.shieldmath.shield.axisymmetric.files.DesignFieldDirection;
 import io.shieldmath.shield.axisymmetric.files.WholeDesign;
+import io.shieldmath.shield.axisymmetric.internal.MeshProgress;
 import io.shieldmath.shield.materials.files.Design;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.model.ShieldingResult;
@@ -153,8 +154,18 @@ final class DesignEvaluation {
      * @throws CommandFailure (bad input) if the design cannot be evaluated there
      */
     Row row(double hz) throws CommandFailure {
+        return row(hz, (fineness, unknowns) -> { });
+    }
+
+    /**
+     * {@link #row(double)}, telling {@code meshes} of each mesh the finite-element solver builds
+     * for it (the stages of its refinement), on this thread, before each is solved.
+     *
+     * @throws CommandFailure (bad input) if the design cannot be evaluated there
+     */
+    Row row(double hz, MeshProgress.Listener meshes) throws CommandFailure {
         try {
-            return compute(hz);
+            return model == null ? compute(hz) : MeshProgress.during(meshes, () -> compute(hz));
         } catch (ArithmeticException | IllegalArgumentException | MeshTooLargeException
                  | ToleranceNotReachedException e) {
             throw CommandFailure.badInput("cannot evaluate the design at " + ResultOutput.shortest(hz) + " Hz: "
