@@ -45,6 +45,9 @@ import java.util.List;
  *       {@code se_db} (axial on a tie).</li>
  * </ul>
  *
+ * <p>Each row also carries its result's validity notes, which the command summarises on standard
+ * error and writes into JSON results (never into CSV rows).
+ *
  * <p>Immutable; each evaluation is independent.
  */
 final class DesignEvaluation {

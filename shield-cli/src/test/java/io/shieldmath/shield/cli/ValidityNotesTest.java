@@ -154,6 +154,17 @@ class ValidityNotesTest {
     }
 
     @Test
+    void aRunThatEndsOnABadLineStillSummarisesTheNotes(@TempDir Path dir) throws IOException {
+        Path design = BatchCommandTest.write(dir, "near.json", NEAR);
+        BatchCommandTest.Run r = BatchCommandTest.run("1 GHz\nfast\n", "--design", design.toString(), "--stdin");
+        assertEquals(BatchCommand.BAD_INPUT, r.code(), r.err());
+        assertTrue(r.err().contains("shield-batch: standard input line 2: "), r.err());
+        assertTrue(r.err().contains("shield-batch: validity note NOT_NEAR_FIELD at 1 of 1 frequency, at 1.0e9 Hz: "),
+                r.err());
+        assertTrue(r.out().lines().noneMatch(l -> l.contains("NOT_NEAR_FIELD")), r.out());
+    }
+
+    @Test
     void aDesignWithoutNotesSaysNothingMore(@TempDir Path dir) throws IOException {
         // A plane wave on copper from 1 kHz to 1 MHz: no limit of the planar model is near
         // (the notes are only for the textbook near-field form and for metals above 100 GHz).
