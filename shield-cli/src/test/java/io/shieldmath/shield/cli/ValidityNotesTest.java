@@ -7,6 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import io.shieldmath.shield.axisymmetric.files.WholeDesign;
+import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
 import io.shieldmath.shield.field.ImpedanceForm;
 import io.shieldmath.shield.field.IncidentField;
 import io.shieldmath.shield.materials.Catalogue;
@@ -162,6 +164,43 @@ class ValidityNotesTest {
         assertTrue(r.err().contains("shield-batch: validity note NOT_NEAR_FIELD at 1 of 1 frequency, at 1.0e9 Hz: "),
                 r.err());
         assertTrue(r.out().lines().noneMatch(l -> l.contains("NOT_NEAR_FIELD")), r.out());
+    }
+
+    /**
+     * A nickel-iron sphere with two openings in a uniform field: each opening in a high-permeability
+     * wall has its own note, and the large port (radius 15 mm at 40 mm from the centre) also its
+     * small-hole note; the notes of one limit stay apart by opening.
+     */
+    static final String SHELL = """
+            {"format": "shield-design", "version": 3, "title": "sphere with a vent and a port (invented)",
+             "shell": {"form": "sphere", "radius": "4 cm",
+                       "walls": [{"material": "nickel-iron-80", "thickness": "1 mm"}],
+                       "openings": [{"kind": "holes", "diameter": "3 mm", "count": 4, "name": "vent"},
+                                    {"kind": "holes", "diameter": "30 mm", "count": 1, "name": "port"}],
+                       "exposure": "uniform"},
+             "field": {"kind": "plane-wave"}, "band": "10 Hz to 1 kHz", "points": 3}
+            """;
+
+    @Test
+    void severalNotesOfOneLimitInAResultStayApart(@TempDir Path dir) throws IOException {
+        Path design = BatchCommandTest.write(dir, "shell.json", SHELL);
+        BatchCommandTest.Run r = BatchCommandTest.run("", "--design", design.toString());
+        assertEquals(0, r.code(), r.err());
+        WholeDesign d = WholeDesignFile.parse(SHELL, Catalogue.builtIn());
+        double[] hz = d.band().logSpacedHertz(d.points());
+        List<ValidityNote> notes = d.model().at(Frequency.ofHertz(hz[0])).validityNotes();
+        for (double f : hz) {
+            assertEquals(notes, d.model().at(Frequency.ofHertz(f)).validityNotes(), "the same notes at every frequency");
+        }
+        assertEquals(3, notes.size(), notes.toString());
+        List<String> expected = new ArrayList<>();
+        for (ValidityNote n : notes) {
+            expected.add("shield-batch: validity note " + n.limit() + " at 3 of 3 frequencies, from "
+                    + ResultOutput.shortest(hz[0]) + " Hz to " + ResultOutput.shortest(hz[2]) + " Hz: " + n.message());
+        }
+        List<String> lines = r.err().lines().toList();
+        assertEquals(expected.size(), lines.size(), r.err());
+        assertTrue(lines.containsAll(expected), r.err());
     }
 
     @Test
