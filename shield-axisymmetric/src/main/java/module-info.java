@@ -16,4 +16,7 @@ module io.shieldmath.shield.axisymmetric {
 
     exports io.shieldmath.shield.axisymmetric;
     exports io.shieldmath.shield.axisymmetric.files;
+
+    // The solver's progress hook (each mesh built), for this library's own command line only.
+    exports io.shieldmath.shield.axisymmetric.internal to io.shieldmath.shield.cli;
 }

@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.axisymmetric;
 
+import io.shieldmath.shield.axisymmetric.internal.MeshProgress;
 import io.shieldmath.shield.axisymmetric.numerics.Layout;
 import io.shieldmath.shield.axisymmetric.numerics.Mesh;
 import io.shieldmath.shield.axisymmetric.numerics.MeshLimitException;
@@ -137,14 +138,18 @@ final class Scene {
     }
 
     /**
-     * A mesh, its limits converted to the public exception.
+     * A mesh, its limits converted to the public exception; the calling thread's
+     * {@link MeshProgress} listener, if any, hears of it.
      */
     Mesh mesh(double[] hertz, double fineness, double box, boolean shortSide, int maxUnknowns, String what) {
+        Mesh mesh;
         try {
-            return new Mesh(layout, hertz, fineness, box, shortSide, maxUnknowns, MeshTooLargeException.MAX_BAND_ENTRIES);
+            mesh = new Mesh(layout, hertz, fineness, box, shortSide, maxUnknowns, MeshTooLargeException.MAX_BAND_ENTRIES);
         } catch (MeshLimitException e) {
             throw new MeshTooLargeException(what, e.unknowns, e.bandEntries, maxUnknowns, fineness);
         }
+        MeshProgress.meshBuilt(fineness, mesh.unknowns());
+        return mesh;
     }
 
     /** The valid-band check of the common contract: from {@code lowest} Hz to the quasi-static limit. */

@@ -49,8 +49,24 @@ import java.util.Objects;
  *
  * <p>Once a run has taken more than about a second (finite-element solves take from a tenth of
  * a second to several seconds per frequency), a short line per frequency done goes to standard
- * error, such as {@code shield-batch: frequency 3 of 21 (2500 Hz) done, 1.4 s}; standard output
- * holds only the results.
+ * error, such as {@code shield-batch: frequency 3 of 21 (2500 Hz) done, 1.4 s}, and before it, for
+ * an axisymmetric design, one line per mesh of the solver's refinement (a coarse and a fine mesh,
+ * more with a tolerance) with its fineness and unknowns, such as
+ * {@code shield-batch: frequency 3 of 21 (2500 Hz): solving a mesh of fineness 1.00 with 64030 unknowns, 1.9 s};
+ * standard output holds only the results.
+ *
+ * <p>Validity notes ({@link io.shieldmath.shield.model.ShieldingResult#validityNotes()}: a result
+ * computed beyond, or near the edge of, the range where its model holds, such as the textbook
+ * near-field impedance beyond the near field or a quasi-static shell not small against the
+ * wavelength) never enter a CSV row. At the end of the run (also when it stops on an error)
+ * standard error gets one line per distinct note with the frequencies where it applied, such as
+ * {@code shield-batch: validity note NOT_NEAR_FIELD at 2 of 4 frequencies, from 1.0e8 Hz to 1.0e9 Hz: kr = ...};
+ * notes are told apart by their limit (and, for several notes of one limit in a result, such as
+ * one per opening of an enclosure, by their order), since their messages carry the numbers of
+ * their frequency, and each line shows the message at the lowest such frequency. With
+ * {@code --format json}, a result object with notes also has the field {@code "validity_notes"},
+ * an array of {@code {"limit": "NOT_NEAR_FIELD", "message": "..."}}, the notes at that frequency
+ * exactly; a result without notes has no such field.
  *
  * <p>Without {@code --band} or {@code --stdin} the design's own band and points are used;
  * {@code --points} alone uses the design's band, {@code --band} alone the design's points.
@@ -142,7 +158,10 @@ public final class BatchCommand {
             + "Evaluates a shield design file (JSON) of any kind (planar stack, closed shell, axisymmetric\n"
             + "arrangement) at frequencies and writes CSV or JSON on standard output, units in the column\n"
             + "names; a design in a field of either direction (\"worst\") also names the worse direction.\n"
-            + "A run longer than about a second reports each frequency done on standard error.\n\n"
+            + "A run longer than about a second reports on standard error each frequency done, and each mesh\n"
+            + "the solver refines it on. Validity notes (results beyond or near their model's limits) are\n"
+            + "summarised on standard error after the run, one line per note with its frequencies; in JSON\n"
+            + "each result with notes also has \"validity_notes\". CSV rows never carry notes.\n\n"
             + "  --design FILE     the design file (\"format\": \"shield-design\")\n"
             + "  --catalogue FILE  a catalogue file whose materials extend the built-in ones\n"
             + "  --band TEXT       a band such as \"10 Hz to 100 kHz\" (default: the design's)\n"
@@ -257,17 +276,21 @@ public final class BatchCommand {
         ResultOutput output = new ResultOutput(out, o.json(), design.title(), evaluation.kind(), evaluation.field(),
                 o.stdin(), evaluation.columns());
         Progress progress = new Progress(err, progressAfter);
+        NoteSummary notes = new NoteSummary();
         try {
             if (o.stdin()) {
-                fromStandardInput(evaluation, new LineInput(in, output::flush), output, err, progress);
+                fromStandardInput(evaluation, new LineInput(in, output::flush), output, err, progress, notes);
             } else {
                 FrequencyBand b = band != null ? band : design.band();
                 int points = o.points() > 0 ? o.points() : design.points();
                 double[] all = b.logSpacedHertz(points);
                 for (int i = 0; i < all.length; i++) {
-                    DesignEvaluation.Row row = evaluation.row(all[i]);
-                    output.write(all[i], row.values(), row.texts());
-                    progress.done("frequency " + (i + 1) + " of " + all.length, all[i]);
+                    String what = "frequency " + (i + 1) + " of " + all.length;
+                    double hz = all[i];
+                    DesignEvaluation.Row row = evaluation.row(hz, (q, n) -> progress.mesh(what, hz, q, n));
+                    output.write(all[i], row.values(), row.texts(), row.notes());
+                    notes.add(all[i], row.notes());
+                    progress.done(what, hz);
                 }
             }
             output.finish();
@@ -275,8 +298,10 @@ public final class BatchCommand {
             if (f.exitCode() != OUTPUT_ERROR) {
                 flushQuietly(output);
             }
+            notes.report(err);
             throw f;
         }
+        notes.report(err);
     }
 
     /**
@@ -287,7 +312,7 @@ public final class BatchCommand {
      * lines, a read error) and output failures stop the run.
      */
     private static void fromStandardInput(DesignEvaluation evaluation, LineInput lines, ResultOutput output,
-            PrintStream err, Progress progress) throws CommandFailure {
+            PrintStream err, Progress progress, NoteSummary notes) throws CommandFailure {
         long failed = 0;
         String line;
         while ((line = lines.next()) != null) {
@@ -299,7 +324,9 @@ public final class BatchCommand {
             DesignEvaluation.Row result;
             try {
                 hz = frequencyHertz(s, evaluation.lowHz(), evaluation.highHz());
-                result = evaluation.row(hz);
+                String what = "standard input line " + lines.lineNumber();
+                double at = hz;
+                result = evaluation.row(hz, (q, n) -> progress.mesh(what, at, q, n));
             } catch (CommandFailure f) {
                 if (f.exitCode() != BAD_INPUT) {
                     throw f;
@@ -312,7 +339,8 @@ public final class BatchCommand {
                 failed++;
                 continue;
             }
-            output.write(hz, result.values(), result.texts());
+            output.write(hz, result.values(), result.texts(), result.notes());
+            notes.add(hz, result.notes());
             progress.done("standard input line " + lines.lineNumber(), hz);
         }
         if (failed > 0) {

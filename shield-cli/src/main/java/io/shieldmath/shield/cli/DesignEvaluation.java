@@ -13,13 +13,16 @@ import io.shieldmath.shield.axisymmetric.WorstDirectionSolution;
 import io.shieldmath.shield.axisymmetric.files.AxisymmetricDesign;
 import io.shieldmath.shield.axisymmetric.files.DesignFieldDirection;
 import io.shieldmath.shield.axisymmetric.files.WholeDesign;
+import io.shieldmath.shield.axisymmetric.internal.MeshProgress;
 import io.shieldmath.shield.materials.files.Design;
 import io.shieldmath.shield.model.ShieldingModel;
 import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.model.ValidityNote;
 import io.shieldmath.shield.planar.PlanarEvaluation;
 import io.shieldmath.shield.planar.PlanarResult;
 import io.shieldmath.shield.quantity.Frequency;
 import io.shieldmath.shield.quantity.FrequencyBand;
+import java.util.List;
 
 /**
  * How the command evaluates one design of any kind at one frequency, and what it writes: the
@@ -41,6 +44,9 @@ import io.shieldmath.shield.quantity.FrequencyBand;
  *       values, and the word {@code axial} or {@code transverse} for the direction that gave
  *       {@code se_db} (axial on a tie).</li>
  * </ul>
+ *
+ * <p>Each row also carries its result's validity notes, which the command summarises on standard
+ * error and writes into JSON results (never into CSV rows).
  *
  * <p>Immutable; each evaluation is independent.
  */
@@ -151,8 +157,18 @@ final class DesignEvaluation {
      * @throws CommandFailure (bad input) if the design cannot be evaluated there
      */
     Row row(double hz) throws CommandFailure {
+        return row(hz, (fineness, unknowns) -> { });
+    }
+
+    /**
+     * {@link #row(double)}, telling {@code meshes} of each mesh the finite-element solver builds
+     * for it (the stages of its refinement), on this thread, before each is solved.
+     *
+     * @throws CommandFailure (bad input) if the design cannot be evaluated there
+     */
+    Row row(double hz, MeshProgress.Listener meshes) throws CommandFailure {
         try {
-            return compute(hz);
+            return model == null ? compute(hz) : MeshProgress.during(meshes, () -> compute(hz));
         } catch (ArithmeticException | IllegalArgumentException | MeshTooLargeException
                  | ToleranceNotReachedException e) {
             throw CommandFailure.badInput("cannot evaluate the design at " + ResultOutput.shortest(hz) + " Hz: "
@@ -161,12 +177,13 @@ final class DesignEvaluation {
     }
 
     /**
-     * The values of one frequency: the numbers, then the texts.
+     * The values of one frequency: the numbers, then the texts, and the result's validity notes.
      *
      * @param values the numbers, in the order of the numeric columns
      * @param texts  the texts, in the order of {@link #textColumns()}
+     * @param notes  the result's {@link ShieldingResult#validityNotes()}, often empty
      */
-    record Row(double[] values, String[] texts) {
+    record Row(double[] values, String[] texts, List<ValidityNote> notes) {
     }
 
     /**
@@ -181,17 +198,18 @@ final class DesignEvaluation {
     private Row compute(double hz) {
         if (planar != null) {
             PlanarResult r = planar.at(Frequency.ofHertz(hz));
-            return numbers(r.shieldingEffectivenessDb(), r.absorptionDb(), r.reflectionDb(), r.multipleReflectionDb());
+            return numbers(r, r.shieldingEffectivenessDb(), r.absorptionDb(), r.reflectionDb(),
+                    r.multipleReflectionDb());
         }
         ShieldingResult r = model.at(Frequency.ofHertz(hz));
         if (r instanceof CouplingSolution c) {
-            return numbers(c.insertionLossDb(), c.insertionLossEstimateDb());
+            return numbers(r, c.insertionLossDb(), c.insertionLossEstimateDb());
         }
         if (r instanceof AxialFieldSolution a) {
-            return numbers(a.shieldingEffectivenessDb(), a.worstShieldingDb().estimate());
+            return numbers(r, a.shieldingEffectivenessDb(), a.worstShieldingDb().estimate());
         }
         if (r instanceof TransverseFieldSolution t) {
-            return numbers(t.shieldingEffectivenessDb(), t.worstShieldingDb().estimate());
+            return numbers(r, t.shieldingEffectivenessDb(), t.worstShieldingDb().estimate());
         }
         if (r instanceof WorstDirectionSolution w) {
             AxialFieldSolution a = w.axial();
@@ -199,12 +217,12 @@ final class DesignEvaluation {
             boolean axial = w.worstDirection() == FieldDirection.AXIAL;
             double estimate = axial ? a.worstShieldingDb().estimate() : t.worstShieldingDb().estimate();
             return new Row(new double[] {w.shieldingEffectivenessDb(), estimate, a.shieldingEffectivenessDb(),
-                t.shieldingEffectivenessDb()}, new String[] {axial ? "axial" : "transverse"});
+                t.shieldingEffectivenessDb()}, new String[] {axial ? "axial" : "transverse"}, w.validityNotes());
         }
-        return numbers(r.shieldingEffectivenessDb());
+        return numbers(r, r.shieldingEffectivenessDb());
     }
 
-    private static Row numbers(double... values) {
-        return new Row(values, new String[0]);
+    private static Row numbers(ShieldingResult r, double... values) {
+        return new Row(values, new String[0], r.validityNotes());
     }
 }

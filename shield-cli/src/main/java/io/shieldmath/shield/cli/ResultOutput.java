@@ -3,6 +3,7 @@
  */
 package io.shieldmath.shield.cli;
 
+import io.shieldmath.shield.model.ValidityNote;
 import java.io.BufferedWriter;
 import java.io.FilterOutputStream;
 import java.io.IOException;
@@ -11,6 +12,7 @@ import java.io.OutputStreamWriter;
 import java.io.PrintStream;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import java.util.Locale;
 
 /**
@@ -35,6 +37,8 @@ final class ResultOutput {
 
     /** The CSV header line of a planar design. */
     static final String CSV_HEADER = "frequency_hz,se_db,absorption_db,reflection_db,multiple_reflection_db";
+    /** The JSON field of a result's validity notes, present only when it has some. */
+    static final String NOTES_FIELD = "validity_notes";
 
     private final Writer writer;
     private final boolean json;
@@ -71,16 +75,15 @@ final class ResultOutput {
         this.columns = columns.clone();
     }
 
-    /** Writes one result, after the header if it is the first; values in the order of the columns. */
-    void write(double hz, double[] values) throws CommandFailure {
-        write(hz, values, new String[0]);
-    }
-
     /**
      * Writes one result, after the header if it is the first: the numbers in the order of the
-     * columns, then the texts (plain words, written as they are in CSV and as JSON strings).
+     * columns, then the texts (plain words, written as they are in CSV and as JSON strings). In
+     * JSON, a result with validity notes gets the field {@code "validity_notes"}, an array of
+     * objects {@code {"limit": "NOT_NEAR_FIELD", "message": "..."}} after its values; a result
+     * without notes has no such field. CSV rows never carry notes (the command reports them
+     * on standard error).
      */
-    void write(double hz, double[] values, String[] texts) throws CommandFailure {
+    void write(double hz, double[] values, String[] texts, List<ValidityNote> notes) throws CommandFailure {
         for (int i = 0; i < values.length; i++) {
             finite(words(columns[i]), values[i], hz);
         }
@@ -88,11 +91,11 @@ final class ResultOutput {
         try {
             if (jsonLines) {
                 header();
-                writer.write(object(b, hz, values, texts).append('\n').toString());
+                writer.write(object(b, hz, values, texts, notes).append('\n').toString());
             } else if (json) {
                 writer.write(count > 0 ? ",\n" : "{\n  \"design\": " + jsonString(title) + ",\n  \"kind\": "
                         + jsonString(kind) + ",\n  \"field\": " + jsonString(field) + ",\n  \"results\": [\n");
-                writer.write(object(b.append("    "), hz, values, texts).toString());
+                writer.write(object(b.append("    "), hz, values, texts, notes).toString());
             } else {
                 header();
                 b.append(shortest(hz));
@@ -110,13 +113,23 @@ final class ResultOutput {
         count++;
     }
 
-    private StringBuilder object(StringBuilder b, double hz, double[] values, String[] texts) {
+    private StringBuilder object(StringBuilder b, double hz, double[] values, String[] texts,
+                                 List<ValidityNote> notes) {
         b.append("{\"frequency_hz\": ").append(shortest(hz));
         for (int i = 0; i < values.length; i++) {
             b.append(", \"").append(columns[i]).append("\": ").append(String.format(Locale.ROOT, "%.6f", values[i]));
         }
         for (int i = 0; i < texts.length; i++) {
             b.append(", \"").append(columns[values.length + i]).append("\": ").append(jsonString(texts[i]));
+        }
+        if (!notes.isEmpty()) {
+            b.append(", \"").append(NOTES_FIELD).append("\": [");
+            for (int i = 0; i < notes.size(); i++) {
+                ValidityNote n = notes.get(i);
+                b.append(i > 0 ? ", " : "").append("{\"limit\": ").append(jsonString(n.limit().name()))
+                        .append(", \"message\": ").append(jsonString(n.message())).append('}');
+            }
+            b.append(']');
         }
         return b.append('}');
     }

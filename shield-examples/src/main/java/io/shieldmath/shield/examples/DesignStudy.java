@@ -13,6 +13,7 @@ import io.shieldmath.shield.axisymmetric.Arrangement;
 import io.shieldmath.shield.axisymmetric.Body;
 import io.shieldmath.shield.axisymmetric.CanEnd;
 import io.shieldmath.shield.axisymmetric.CoilCoupling;
+import io.shieldmath.shield.axisymmetric.CouplingSolution;
 import io.shieldmath.shield.axisymmetric.EstimatedValue;
 import io.shieldmath.shield.axisymmetric.FieldDirection;
 import io.shieldmath.shield.axisymmetric.SaturationOnset;
@@ -38,6 +39,8 @@ import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.MagnetizationCurves;
 import io.shieldmath.shield.materials.Material;
 import io.shieldmath.shield.model.ShieldingModel;
+import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.model.ValidityNote;
 import io.shieldmath.shield.planar.Barrier;
 import io.shieldmath.shield.planar.Layer;
 import io.shieldmath.shield.quantity.Frequency;
@@ -56,8 +59,10 @@ import java.nio.file.Paths;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.TreeSet;
 import java.util.concurrent.ExecutionException;
@@ -81,7 +86,8 @@ import java.util.function.DoubleFunction;
  * known: each can counts the worse of a field along its axis and one across it
  * ({@link WorstDirectionShielding}). It ranks them by mass against the requirement and
  * recommends the lightest that meets it, saying which direction is the worse one where its
- * margin is smallest. The same plates as
+ * margin is smallest, with the validity notes of its results at the study's frequencies (or
+ * that they carry none). The same plates as
  * infinite sheets between the same coils are computed beside them, as a separate, labelled
  * comparison that is never recommended. It writes into an output folder a CSV of the results,
  * the whole recommended design as a design file (version 3, the can's applied field
@@ -189,13 +195,14 @@ public final class DesignStudy {
      * @param se    SE in dB with its discretisation estimate
      * @param worse for a can, the direction of the applied field that gave that SE (the worse one); null
      *              for a plate
+     * @param notes the result's validity notes ({@link ShieldingResult#validityNotes()}), often empty
      */
-    record Sample(EstimatedValue se, FieldDirection worse) {
+    record Sample(EstimatedValue se, FieldDirection worse, List<ValidityNote> notes) {
     }
 
     /** A candidate with its SE (and a can's worse direction) at every frequency of the study and its margin per band. */
     record Evaluated(Candidate candidate, double[] seDb, double[] estimateDb, FieldDirection[] worse,
-                     List<Margin> margins) {
+                     List<List<ValidityNote>> notes, List<Margin> margins) {
 
         boolean meets() {
             return margins.stream().allMatch(m -> m.marginDb() >= 0);
@@ -291,6 +298,9 @@ public final class DesignStudy {
         List<Evaluated> sheets = results.stream().filter(e -> !e.candidate().solved()).toList();
 
         Evaluated best = printRanking(out, solved);
+        if (best != null) {
+            noteLines(hz, best.notes()).forEach(out::println);
+        }
         printSheetComparison(out, sheets, solved, hz);
         printSaturation(out, best, need);
         printCautions(out);
@@ -426,15 +436,14 @@ public final class DesignStudy {
                 .withFineness(FINENESS);
         Candidate finite = new Candidate(kind, name + String.format(Locale.ROOT, ", %.0f mm across",
                 2 * PLATE_RADIUS.toMetres() * 1e3), mass, true,
-                hz -> new Sample((hz < SOURCE_SPLIT_HZ ? far : near).at(Frequency.ofHertz(hz)).insertionLossEstimated(),
-                        null),
+                hz -> plateSample((hz < SOURCE_SPLIT_HZ ? far : near).at(Frequency.ofHertz(hz))),
                 nearBodies, near, null);
         Barrier barrier = Barrier.of(sheets.stream().map(Sheet::layer).toList());
         CouplingEvaluation sheetNear = coils(true).through(barrier);
         CouplingEvaluation sheetFar = coils(false).through(barrier);
         Candidate sheet = new Candidate(kind, name, mass, false,
                 hz -> new Sample(new EstimatedValue((hz < SOURCE_SPLIT_HZ ? sheetFar : sheetNear)
-                        .shieldingEffectivenessDb(hz), 0), null),
+                        .shieldingEffectivenessDb(hz), 0), null, List.of()),
                 null, sheetNear, null);
         return List.of(finite, sheet);
     }
@@ -459,7 +468,13 @@ public final class DesignStudy {
     /** The worse direction's SE, its estimate and the direction (axial on a tie, as the solution says). */
     private static Sample worse(WorstDirectionSolution s) {
         FieldDirection d = s.worstDirection();
-        return new Sample(d == FieldDirection.AXIAL ? s.axial().worstShieldingDb() : s.transverse().worstShieldingDb(), d);
+        return new Sample(d == FieldDirection.AXIAL ? s.axial().worstShieldingDb() : s.transverse().worstShieldingDb(), d,
+                s.validityNotes());
+    }
+
+    /** A finite plate's insertion loss with its estimate and its notes. */
+    private static Sample plateSample(CouplingSolution s) {
+        return new Sample(s.insertionLossEstimated(), null, s.validityNotes());
     }
 
     /** A can's mass: the tube between the caps, two caps, less the cable hole (or, hole null, an open tube). */
@@ -537,10 +552,12 @@ public final class DesignStudy {
             double[] se = new double[hz.length];
             double[] est = new double[hz.length];
             FieldDirection[] worse = new FieldDirection[hz.length];
+            List<List<ValidityNote>> notes = new ArrayList<>(hz.length);
             for (int j = 0; j < hz.length; j++) {
                 se[j] = values[i][j].se().value();
                 est[j] = values[i][j].se().estimate();
                 worse[j] = values[i][j].worse();
+                notes.add(values[i][j].notes());
             }
             List<Margin> margins = new ArrayList<>();
             for (Requirement.Entry e : need.entries()) {
@@ -554,7 +571,7 @@ public final class DesignStudy {
                 }
                 margins.add(worst);
             }
-            out.add(new Evaluated(candidates.get(i), se, est, worse, List.copyOf(margins)));
+            out.add(new Evaluated(candidates.get(i), se, est, worse, List.copyOf(notes), List.copyOf(margins)));
         }
         return out;
     }
@@ -625,6 +642,46 @@ public final class DesignStudy {
                             : " with the field across its axis, the worse direction there"));
         }
         return best;
+    }
+
+    /**
+     * The report's lines on the validity notes of the recommended design's results at the
+     * study's frequencies ({@link ShieldingResult#validityNotes()}): "no validity notes", or one
+     * line per limit with how many frequencies it applied at, their range and the message at the
+     * lowest of them (a message carries the numbers of its own frequency).
+     *
+     * @param hz    the study's frequencies, Hz, ascending
+     * @param notes the notes at each of them
+     * @return the lines
+     */
+    static List<String> noteLines(double[] hz, List<List<ValidityNote>> notes) {
+        String where = "The recommended design's results at the study's " + hz.length + " frequencies carry ";
+        Map<ValidityNote.Limit, List<Integer>> at = new EnumMap<>(ValidityNote.Limit.class);
+        for (int j = 0; j < hz.length; j++) {
+            for (ValidityNote n : notes.get(j)) {
+                List<Integer> js = at.computeIfAbsent(n.limit(), l -> new ArrayList<>());
+                if (js.isEmpty() || js.get(js.size() - 1) != j) {
+                    js.add(j);
+                }
+            }
+        }
+        if (at.isEmpty()) {
+            return List.of(where + "no validity notes.");
+        }
+        List<String> lines = new ArrayList<>();
+        lines.add(where + "validity notes (the numbers stand, but trust them less):");
+        for (Map.Entry<ValidityNote.Limit, List<Integer>> e : at.entrySet()) {
+            List<Integer> js = e.getValue();
+            int first = js.get(0);
+            int last = js.get(js.size() - 1);
+            String message = notes.get(first).stream().filter(n -> n.limit() == e.getKey()).findFirst().orElseThrow()
+                    .message();
+            lines.add("  " + e.getKey() + " at " + js.size() + " of " + hz.length + " frequencies, "
+                    + (first == last ? "at " + Frequency.ofHertz(hz[first])
+                            : "from " + Frequency.ofHertz(hz[first]) + " to " + Frequency.ofHertz(hz[last]))
+                    + ": " + message);
+        }
+        return lines;
     }
 
     /** A can's worse direction in the ranking, "-" for a plate. */

@@ -23,6 +23,8 @@ import io.shieldmath.shield.axisymmetric.files.WholeDesignFile;
 import io.shieldmath.shield.design.Requirement;
 import io.shieldmath.shield.materials.Catalogue;
 import io.shieldmath.shield.materials.MagnetizationCurves;
+import io.shieldmath.shield.model.ShieldingResult;
+import io.shieldmath.shield.model.ValidityNote;
 import io.shieldmath.shield.quantity.Length;
 import io.shieldmath.shield.quantity.MagneticFieldStrength;
 import io.shieldmath.shield.quantity.MagneticFluxDensity;
@@ -170,11 +172,47 @@ class DesignStudyTest {
         int from = readme.indexOf("## Quick start");
         String quick = readme.substring(from, readme.indexOf("\n## ", from + 1));
         List<String> shown = quick.lines().filter(l -> l.startsWith("  can ") || l.startsWith("  plate ")
-                || l.startsWith("Recommended: ") || l.startsWith("  body ")).toList();
+                || l.startsWith("Recommended: ") || l.startsWith("  body ")
+                || l.startsWith("The recommended design's results")).toList();
         assertTrue(shown.size() >= 4, quick);
         for (String line : shown) {
             assertTrue(report.contains(line), "README shows a line the study no longer prints: " + line);
         }
+    }
+
+    @Test
+    void theReportGivesTheRecommendedDesignsValidityNotes() {
+        double[] hz = DesignStudy.studyFrequencies(outcome.requirement());
+        String intro = "The recommended design's results at the study's " + hz.length + " frequencies carry ";
+        List<String> said = report.lines().filter(l -> l.startsWith(intro)).toList();
+        assertEquals(1, said.size(), report);
+        int recommended = report.indexOf("Recommended: ");
+        assertTrue(report.indexOf(intro) > recommended, "the notes follow the recommendation\n" + report);
+        // The library's own result at the worst frequency: each of its notes is counted in the report,
+        // and a report of no notes means it has none.
+        ShieldingResult there = outcome.recommendedModel().at(outcome.worstFrequency());
+        if (said.get(0).equals(intro + "no validity notes.")) {
+            assertEquals(List.of(), there.validityNotes());
+        }
+        for (ValidityNote n : there.validityNotes()) {
+            assertTrue(report.contains("\n  " + n.limit() + " at "), n + "\n" + report);
+        }
+    }
+
+    @Test
+    void noteLinesSayNoneOrGiveEachLimitWithItsFrequencies() {
+        double[] hz = {10, 100, 1000};
+        assertEquals(List.of("The recommended design's results at the study's 3 frequencies carry no validity notes."),
+                DesignStudy.noteLines(hz, List.of(List.of(), List.of(), List.of())));
+        ValidityNote at100 = ValidityNote.of(ValidityNote.Limit.QUASI_STATIC, "k0·L = 0.2 at 100 Hz");
+        ValidityNote at1000 = ValidityNote.of(ValidityNote.Limit.QUASI_STATIC, "k0·L = 2 at 1 kHz");
+        ValidityNote hole = ValidityNote.of(ValidityNote.Limit.SMALL_HOLE, "vent: a large hole");
+        assertEquals(List.of(
+                "The recommended design's results at the study's 3 frequencies carry validity notes (the numbers stand, "
+                        + "but trust them less):",
+                "  QUASI_STATIC at 2 of 3 frequencies, from 100 Hz to 1 kHz: k0·L = 0.2 at 100 Hz",
+                "  SMALL_HOLE at 1 of 3 frequencies, at 10 Hz: vent: a large hole"),
+                DesignStudy.noteLines(hz, List.of(List.of(hole), List.of(at100), List.of(at1000))));
     }
 
     @Test
