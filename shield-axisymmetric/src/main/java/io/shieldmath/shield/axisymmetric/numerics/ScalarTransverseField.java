@@ -40,10 +40,9 @@ final class ScalarTransverseField extends TransverseField {
     public void evaluate(double r, double z, double[] out) {
         int i = Field.cell(mesh.rl, r);
         int j = Field.cell(mesh.zl, z);
-        double[] pr = {nodeRe(i, j), nodeRe(i + 1, j), nodeRe(i + 1, j + 1), nodeRe(i, j + 1)};
-        double[] pi = {nodeIm(i, j), nodeIm(i + 1, j), nodeIm(i + 1, j + 1), nodeIm(i, j + 1)};
         int mat = mesh.elementMaterial[i + (mesh.nr - 1) * j];
-        fluxDensity(mesh, i, j, r, z, pr, pi, muRe[mat], muIm[mat], out);
+        fluxDensity(mesh, i, j, r, z, nodeRe(i, j), nodeRe(i + 1, j), nodeRe(i + 1, j + 1), nodeRe(i, j + 1),
+                nodeIm(i, j), nodeIm(i + 1, j), nodeIm(i + 1, j + 1), nodeIm(i, j + 1), muRe[mat], muIm[mat], out);
     }
 
     /**
@@ -51,14 +50,14 @@ final class ScalarTransverseField extends TransverseField {
      * values at its four nodes (local order (i,j), (i+1,j), (i+1,j+1), (i,j+1)): shared by the
      * scalar solve and the non-conducting region of {@link TransverseEddySolve}.
      *
-     * @param pr  the nodes' real parts
-     * @param pi  the nodes' imaginary parts
+     * (the four nodes' real parts, then their imaginary parts: no array per point).
+     *
      * @param mr  µr′ of the element
      * @param mi  the imaginary part of µr (−µr″)
      * @param out receives [b_r re, b_r im, b_φ re, b_φ im, b_z re, b_z im]
      */
-    static void fluxDensity(Mesh mesh, int i, int j, double r, double z, double[] pr, double[] pi,
-                            double mr, double mi, double[] out) {
+    static void fluxDensity(Mesh mesh, int i, int j, double r, double z, double p0, double p1, double p2, double p3,
+                            double q0, double q1, double q2, double q3, double mr, double mi, double[] out) {
         double ra = mesh.rl[i];
         double rb = mesh.rl[i + 1];
         double za = mesh.zl[j];
@@ -70,14 +69,17 @@ final class ScalarTransverseField extends TransverseField {
         double v0 = (zb - z) / hZ;
         double v1 = (z - za) / hZ;
         for (int part = 0; part < 2; part++) {
-            double[] a = part == 0 ? pr : pi;
-            double p = a[0] * u0 * v0 + a[1] * u1 * v0 + a[2] * u1 * v1 + a[3] * u0 * v1;
-            double dPdr = ((a[1] - a[0]) * v0 + (a[2] - a[3]) * v1) / hR;
-            double dPdz = ((a[3] - a[0]) * u0 + (a[2] - a[1]) * u1) / hZ;
+            double a0 = part == 0 ? p0 : q0;
+            double a1 = part == 0 ? p1 : q1;
+            double a2 = part == 0 ? p2 : q2;
+            double a3 = part == 0 ? p3 : q3;
+            double p = a0 * u0 * v0 + a1 * u1 * v0 + a2 * u1 * v1 + a3 * u0 * v1;
+            double dPdr = ((a1 - a0) * v0 + (a2 - a3) * v1) / hR;
+            double dPdz = ((a3 - a0) * u0 + (a2 - a1) * u1) / hZ;
             // Φ1/r: next to the axis the nodes at r = 0 hold Φ1 = 0, so Φ1 = (r/h)(v0·a1 + v1·a2)
             // and Φ1/r = (v0·a1 + v1·a2)/h exactly, finite on the axis itself (where it equals
             // ∂Φ1/∂r, so H is single-valued there).
-            double pOverR = i == 0 ? (v0 * a[1] + v1 * a[2]) / hR : p / r;
+            double pOverR = i == 0 ? (v0 * a1 + v1 * a2) / hR : p / r;
             out[part] = -dPdr;
             out[2 + part] = pOverR;
             out[4 + part] = -dPdz;

@@ -523,8 +523,12 @@ public final class TransverseEddySolve {
      * reference formulation in the tests.
      *
      * @param out receives [b_r re, b_r im, b_φ re, b_φ im, b_z re, b_z im]
+     * @param nv  work array of 4
+     * @param dr  work array of 4
+     * @param dz  work array of 4
      */
-    static void fluxFromVectorPotential(Mesh mesh, int i, int j, double r, double z, double[] values, double[] out) {
+    static void fluxFromVectorPotential(Mesh mesh, int i, int j, double r, double z, double[] values, double[] out,
+                                        double[] nv, double[] dr, double[] dz) {
         double ra = mesh.rl[i];
         double rb = mesh.rl[i + 1];
         double za = mesh.zl[j];
@@ -535,9 +539,6 @@ public final class TransverseEddySolve {
         double v1 = (z - za) / hZ;
         double s0 = (rb - r) / hR;
         double s1 = (r - ra) / hR;
-        double[] nv = new double[4];
-        double[] dr = new double[4];
-        double[] dz = new double[4];
         if (i > 0) {
             Mesh.shape(r, z, ra, rb, za, zb, nv, dr, dz);
         }
@@ -588,29 +589,42 @@ public final class TransverseEddySolve {
             Mesh mesh = s.mesh;
             int i = Field.cell(mesh.rl, r);
             int j = Field.cell(mesh.zl, z);
-            int[] g = new int[LOCAL];
-            double[] c = new double[LOCAL];
+            Scratch w = SCRATCH.get();
+            int[] g = w.g;
+            double[] c = w.c;
             s.map(i, j, g, c);
             if (!s.isConductor(i, j)) {
-                double[] pr = new double[4];
-                double[] pi = new double[4];
-                for (int k = 0; k < 4; k++) {
-                    int gk = g[8 + k];
-                    pr[k] = gk >= 0 ? xr[gk] : s.fixedPsi(k == 1 || k == 2 ? i + 1 : i);
-                    pi[k] = gk >= 0 ? xi[gk] : 0;
-                }
                 int mat = mesh.elementMaterial[i + (mesh.nr - 1) * j];
-                ScalarTransverseField.fluxDensity(mesh, i, j, r, z, pr, pi, s.muRe[mat], s.muIm[mat], out);
+                ScalarTransverseField.fluxDensity(mesh, i, j, r, z, psi(g[8], i, xr), psi(g[9], i + 1, xr),
+                        psi(g[10], i + 1, xr), psi(g[11], i, xr), psi(g[8], -1, xi), psi(g[9], -1, xi),
+                        psi(g[10], -1, xi), psi(g[11], -1, xi), s.muRe[mat], s.muIm[mat], out);
                 return;
             }
-            double[] val = new double[16];
+            double[] val = w.values;
             for (int k = 0; k < 8; k++) {
                 val[k] = g[k] >= 0 ? c[k] * xr[g[k]] : 0;
                 val[8 + k] = g[k] >= 0 ? c[k] * xi[g[k]] : 0;
             }
-            fluxFromVectorPotential(mesh, i, j, r, z, val, out);
+            fluxFromVectorPotential(mesh, i, j, r, z, val, out, w.nv, w.dr, w.dz);
+        }
+
+        /** ψ1 at a node: the unknown, or the fixed value on grid line i (−1: the imaginary part, 0). */
+        private double psi(int index, int line, double[] x) {
+            return index >= 0 ? x[index] : line < 0 ? 0 : s.fixedPsi(line);
         }
     }
+
+    /** Per-thread work arrays of the field evaluation, so that it allocates nothing per point. */
+    private static final class Scratch {
+        final int[] g = new int[LOCAL];
+        final double[] c = new double[LOCAL];
+        final double[] values = new double[16];
+        final double[] nv = new double[4];
+        final double[] dr = new double[4];
+        final double[] dz = new double[4];
+    }
+
+    private static final ThreadLocal<Scratch> SCRATCH = ThreadLocal.withInitial(Scratch::new);
 
     /**
      * The global index of every unknown, node by node along one grid direction: at each node

@@ -381,7 +381,8 @@ final class EdgeEverywhereSolve {
                 val[k] = g[k] >= 0 ? c[k] * xr[g[k]] : fixed[k];
                 val[8 + k] = g[k] >= 0 ? c[k] * xi[g[k]] : 0;
             }
-            TransverseEddySolve.fluxFromVectorPotential(mesh, i, j, r, z, val, out);
+            TransverseEddySolve.fluxFromVectorPotential(mesh, i, j, r, z, val, out, new double[4], new double[4],
+                    new double[4]);
         }
     }
 }
