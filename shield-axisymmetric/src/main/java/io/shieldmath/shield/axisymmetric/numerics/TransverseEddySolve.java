@@ -154,7 +154,7 @@ public final class TransverseEddySolve {
         first = alongBetter ? firstAlong : firstAcross;
         n = num.count;
         diag = BandedLdlt.envelopeDiagonals(first);
-        long entries = n == 0 ? 0 : diag[n - 1] + 1L;
+        long entries = storedEntries();
         if (n > maxUnknowns || entries > maxBandEntries) {
             throw new MeshLimitException(n, entries, maxUnknowns, maxBandEntries);
         }
