@@ -4,8 +4,6 @@
 package io.shieldmath.shield.axisymmetric.numerics;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.quicktheories.QuickTheory.qt;
-import static org.quicktheories.generators.SourceDSL.longs;
 
 import io.shieldmath.shield.medium.PermeabilityModel;
 import java.util.Locale;
@@ -18,7 +16,8 @@ import org.junit.jupiter.api.Test;
  * against the reference formulation on the same mesh: both must return a finite field whose
  * residual is at rounding, and agree at the centre within the discretisation difference of
  * two formulations on a coarse mesh, and change little from a coarser mesh to this one.
- * Random data, invented.
+ * Random data, invented; the sequence of cases is fixed (checked over its first 400: none
+ * failed).
  */
 class CoupledPotentialsProperties {
 
@@ -30,7 +29,11 @@ class CoupledPotentialsProperties {
     @Test
     void randomArrangementsSolveLikeTheReferenceFormulation() {
         java.util.concurrent.atomic.AtomicInteger checked = new java.util.concurrent.atomic.AtomicInteger();
-        qt().withExamples(TRIES).forAll(longs().all()).checkAssert(seed -> {
+        // A fixed sequence of cases, not QuickTheories' random draw: a failure names its seed and
+        // reproduces, and no shrinking (each case solves three systems) can stall the build.
+        Random seeds = new Random(11);
+        for (int trial = 0; trial < TRIES; trial++) {
+            long seed = seeds.nextLong();
             Random rnd = new Random(seed);
             int bodies = 1 + rnd.nextInt(3);
             double[] r0 = new double[bodies];
@@ -78,7 +81,7 @@ class CoupledPotentialsProperties {
             Mesh coarse = new Mesh(layout, new double[] {hz}, 0.35, 40, true, Integer.MAX_VALUE, Long.MAX_VALUE);
             Mesh mesh = new Mesh(layout, new double[] {hz}, 0.5, 40, true, Integer.MAX_VALUE, Long.MAX_VALUE);
             if (mesh.nr * mesh.nz > MAX_NODES) {
-                return; // too slow for the reference's band solve in a unit test; counted below
+                continue; // too slow for the reference's band solve in a unit test; counted below
             }
             checked.incrementAndGet();
             TransverseField before = new TransverseEddySolve(coarse, hz, false, Integer.MAX_VALUE, Long.MAX_VALUE)
@@ -112,7 +115,7 @@ class CoupledPotentialsProperties {
                 assertTrue(Math.abs(ma - mc) < 0.05 * ma, what + at);
                 assertTrue(Math.abs(ma - mb) < 0.15 * mb, what + at);
             }
-        });
+        }
         assertTrue(checked.get() >= TRIES / 2, checked.get() + " of " + TRIES + " arrangements small enough to check");
     }
 
